@@ -1,0 +1,17 @@
+/// <reference types="vitest/config" />
+import { defineConfig } from 'vite';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  build: { outDir: 'dist/client', emptyOutDir: true },
+  server: { proxy: { '/api': 'http://127.0.0.1:3000' } },
+  test: {
+    include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
+    exclude: ['tests/e2e/**', 'node_modules/**'],
+    environment: 'node',
+    testTimeout: 30000,
+    hookTimeout: 60000,
+  },
+});
