@@ -1,0 +1,102 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import { RequestContext } from '@mikro-orm/core';
+import type { Orm } from './db.js';
+import { apiNotFound, errorHandler, type Logger } from './middleware/error-handler.js';
+import { createPassport } from './modules/auth/auth.passport.js';
+import { authRoutes } from './modules/auth/auth.routes.js';
+import { AuthService } from './modules/auth/auth.service.js';
+import type { RateLimitOptions } from './modules/auth/rate-limit.js';
+import { designRoutes } from './modules/designs/designs.routes.js';
+import { DesignsService } from './modules/designs/designs.service.js';
+import { memberRoutes } from './modules/workshops/workshops.routes.js';
+import { WorkshopsService } from './modules/workshops/workshops.service.js';
+import './session-user.js';
+
+export const SESSION_COOKIE = 'boxwright.sid';
+const SESSION_MAX_AGE_MS = 14 * 24 * 60 * 60 * 1000;
+
+export interface AppDeps {
+  orm: Orm;
+  sessionStore: session.Store;
+  /** Signs the session cookie; several for rotation (the first signs). */
+  sessionSecret: string | string[];
+  /** Secure cookies (HTTPS only). Off for plain http on localhost. */
+  secureCookies?: boolean;
+  /** Express `trust proxy` setting, when behind a reverse proxy (client addresses for rate limits). */
+  trustProxy?: boolean | number | string;
+  loginLimit?: RateLimitOptions;
+  signupLimit?: RateLimitOptions;
+  /** The built client (dist/client); null serves the API only. */
+  clientDir?: string | null;
+  logger?: Logger;
+}
+
+/** Builds the Express app: JSON API under /api, then the built client with its SPA fallback. */
+export function createApp(deps: AppDeps): Express {
+  const { orm } = deps;
+  const logger = deps.logger ?? console;
+  const app = express();
+  app.disable('x-powered-by');
+  if (deps.trustProxy !== undefined) app.set('trust proxy', deps.trustProxy);
+
+  // Services take the global em; inside a request it resolves to that request's RequestContext fork.
+  const auth = new AuthService(orm.em);
+  const workshops = new WorkshopsService(orm.em);
+  const designs = new DesignsService(orm.em);
+  const passport = createPassport(auth);
+  const roleLookup = workshops.roleOf.bind(workshops);
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(
+    session({
+      name: SESSION_COOKIE,
+      store: deps.sessionStore,
+      secret: deps.sessionSecret,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: deps.secureCookies ?? false, maxAge: SESSION_MAX_AGE_MS, path: '/' },
+    }),
+  );
+  api.use((_req, _res, next) => RequestContext.create(orm.em, next));
+  api.use(passport.initialize());
+  api.use(passport.session());
+
+  api.get('/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+  api.use(
+    '/auth',
+    authRoutes({ auth, passport, sessionCookieName: SESSION_COOKIE, loginLimit: deps.loginLimit, signupLimit: deps.signupLimit }),
+  );
+  api.use('/workshops/:wid/members', memberRoutes(workshops));
+  api.use('/workshops/:wid/designs', designRoutes(designs, roleLookup));
+  api.use(apiNotFound);
+  api.use(errorHandler(logger));
+  app.use('/api', api);
+
+  const clientDir = deps.clientDir ?? null;
+  const indexHtml = clientDir ? path.join(clientDir, 'index.html') : null;
+  if (clientDir && indexHtml && existsSync(indexHtml)) {
+    app.use(
+      express.static(clientDir, {
+        index: false,
+        setHeaders: (res, file) => {
+          // Vite names built assets by content hash: cache them for good.
+          if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+        },
+      }),
+    );
+    // Every other GET is a client route (Express 5 / path-to-regexp 8 syntax, STACK.md trap 7).
+    app.get('/{*splat}', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(indexHtml);
+    });
+  }
+  app.use(errorHandler(logger));
+  return app;
+}

@@ -1,0 +1,7 @@
+import { User } from './modules/auth/user.entity.js';
+import { Design } from './modules/designs/design.entity.js';
+import { Membership } from './modules/workshops/membership.entity.js';
+import { Workshop } from './modules/workshops/workshop.entity.js';
+
+/** Every entity, listed once for the ORM config (explicit, so tsx, vitest and the CLI see the same set). */
+export const ENTITIES = [User, Workshop, Membership, Design];

@@ -1,0 +1,16 @@
+import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
+import { UNIT_SYSTEMS } from '../../../shared/schemas/api.schema.js';
+
+/** A person who signs in. The password hash is hidden and lazy: never serialised, loaded only to verify. */
+export const User = defineEntity({
+  name: 'User',
+  tableName: 'users',
+  properties: {
+    id: p.integer().primary().autoincrement(),
+    email: p.string().length(254).unique(),
+    passwordHash: p.string().length(255).hidden().lazy(true, false),
+    units: p.enum([...UNIT_SYSTEMS]).default('mm'),
+    createdAt: p.datetime().onCreate(() => new Date()),
+  },
+});
+export type User = InferEntity<typeof User>;

@@ -1,0 +1,189 @@
+/**
+ * Every route × each of the four roles × a member of another workshop × signed out, with the expected status.
+ * Expected statuses follow the role table of PRODUCT.md §2 (PERMISSIONS in shared/schemas/api.schema.ts) and
+ * HTTP semantics of RFC 9110: 200 OK (§15.3.1), 201 Created (§15.3.2), 204 No Content (§15.3.5),
+ * 401 Unauthorized (§15.5.2), 403 Forbidden (§15.5.4).
+ */
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_BOOKSHELF } from '../../shared/demo/designs.js';
+import { User } from '../../server/modules/auth/user.entity.js';
+import { DesignsService } from '../../server/modules/designs/designs.service.js';
+import { Design } from '../../server/modules/designs/design.entity.js';
+import { Membership } from '../../server/modules/workshops/membership.entity.js';
+import { buildTestApp, DEMO, signIn, signUp, type Agent, type TestApp } from './helpers.js';
+
+type Who = 'owner' | 'designer' | 'maker' | 'viewer' | 'outsider' | 'signedOut';
+const WHO: Who[] = ['owner', 'designer', 'maker', 'viewer', 'outsider', 'signedOut'];
+
+let t: TestApp;
+let workshopId: number;
+const agents = {} as Record<Exclude<Who, 'signedOut'>, Agent>;
+let outsiderEmail = '';
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  for (const role of ['owner', 'designer', 'maker', 'viewer'] as const) agents[role] = await signIn(t.app, DEMO[role]);
+  outsiderEmail = 'someone@otherbench.test';
+  agents.outsider = (await signUp(t.app, outsiderEmail, 'Other Bench')).agent;
+  const me = await agents.owner.get('/api/auth/me').expect(200);
+  workshopId = me.body.memberships[0].workshopId;
+});
+afterAll(async () => t.close());
+
+/** A design of the demo workshop made for one case, so destructive cases never share a target. */
+async function freshDesign(): Promise<{ id: number; version: number }> {
+  const em = t.orm.em.fork();
+  const dto = await new DesignsService(em).create(workshopId, { ...DEMO_BOOKSHELF, name: 'Role check' }, DEMO.designer);
+  return { id: dto.id, version: dto.version };
+}
+
+/** A maker added to the demo workshop for one case. */
+async function freshMember(): Promise<number> {
+  const em = t.orm.em.fork();
+  const user = em.create(User, { email: `member-${Math.random().toString(36).slice(2)}@harbourlane.test`, passwordHash: 'not-used' });
+  em.create(Membership, { user, workshop: workshopId, role: 'maker' });
+  await em.flush();
+  return user.id;
+}
+
+async function designExists(id: number): Promise<boolean> {
+  return (await t.orm.em.fork().count(Design, { id })) === 1;
+}
+
+interface Case {
+  name: string;
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
+  /** Builds the path and body for one request (may create its own target). */
+  prepare(): Promise<{ path: string; body?: unknown; check?: (status: number) => Promise<void> }>;
+  expected: Record<Who, number>;
+  /** Sign in anew for this case (the request ends the session). */
+  freshSession?: boolean;
+}
+
+const all = (ok: number): Record<Who, number> => ({ owner: ok, designer: ok, maker: ok, viewer: ok, outsider: ok, signedOut: 401 });
+const members = (ok: number): Record<Who, number> => ({ owner: ok, designer: ok, maker: ok, viewer: ok, outsider: 403, signedOut: 401 });
+const editors = (ok: number): Record<Who, number> => ({ owner: ok, designer: ok, maker: 403, viewer: 403, outsider: 403, signedOut: 401 });
+const owners = (ok: number): Record<Who, number> => ({ owner: ok, designer: 403, maker: 403, viewer: 403, outsider: 403, signedOut: 401 });
+
+const CASES: Case[] = [
+  { name: 'GET /api/auth/me', method: 'get', prepare: async () => ({ path: '/api/auth/me' }), expected: all(200) },
+  { name: 'PATCH /api/auth/me', method: 'patch', prepare: async () => ({ path: '/api/auth/me', body: { units: 'mm' } }), expected: all(200) },
+  { name: 'POST /api/auth/logout', method: 'post', prepare: async () => ({ path: '/api/auth/logout' }), expected: all(204), freshSession: true },
+  { name: 'GET members', method: 'get', prepare: async () => ({ path: `/api/workshops/${workshopId}/members` }), expected: members(200) },
+  {
+    name: 'PATCH member role',
+    method: 'patch',
+    prepare: async () => {
+      const userId = await freshMember();
+      return {
+        path: `/api/workshops/${workshopId}/members/${userId}`,
+        body: { role: 'viewer' },
+        check: async (status) => {
+          const m = await t.orm.em.fork().findOneOrFail(Membership, { user: userId });
+          expect(m.role).toBe(status === 200 ? 'viewer' : 'maker');
+        },
+      };
+    },
+    expected: owners(200),
+  },
+  {
+    name: 'DELETE member',
+    method: 'delete',
+    prepare: async () => {
+      const userId = await freshMember();
+      return {
+        path: `/api/workshops/${workshopId}/members/${userId}`,
+        check: async (status) => expect(await t.orm.em.fork().count(Membership, { user: userId })).toBe(status === 204 ? 0 : 1),
+      };
+    },
+    expected: owners(204),
+  },
+  { name: 'GET designs', method: 'get', prepare: async () => ({ path: `/api/workshops/${workshopId}/designs` }), expected: members(200) },
+  {
+    name: 'POST design',
+    method: 'post',
+    prepare: async () => {
+      const name = `Created ${Math.random().toString(36).slice(2)}`;
+      return {
+        path: `/api/workshops/${workshopId}/designs`,
+        body: { ...DEMO_BOOKSHELF, name },
+        check: async (status) => expect(await t.orm.em.fork().count(Design, { name })).toBe(status === 201 ? 1 : 0),
+      };
+    },
+    expected: editors(201),
+  },
+  {
+    name: 'GET design',
+    method: 'get',
+    prepare: async () => ({ path: `/api/workshops/${workshopId}/designs/${(await freshDesign()).id}` }),
+    expected: members(200),
+  },
+  {
+    name: 'PUT design',
+    method: 'put',
+    prepare: async () => {
+      const { id, version } = await freshDesign();
+      return {
+        path: `/api/workshops/${workshopId}/designs/${id}`,
+        body: { version, design: { ...DEMO_BOOKSHELF, name: 'Role check', outer: { ...DEMO_BOOKSHELF.outer, width: 230 } } },
+        check: async (status) => {
+          const d = await t.orm.em.fork().findOneOrFail(Design, { id });
+          expect(d.data.outer.width).toBe(status === 200 ? 230 : DEMO_BOOKSHELF.outer.width);
+        },
+      };
+    },
+    expected: editors(200),
+  },
+  {
+    name: 'DELETE design',
+    method: 'delete',
+    prepare: async () => {
+      const { id } = await freshDesign();
+      return { path: `/api/workshops/${workshopId}/designs/${id}`, check: async (status) => expect(await designExists(id)).toBe(status !== 204) };
+    },
+    expected: editors(204),
+  },
+  {
+    name: 'POST duplicate',
+    method: 'post',
+    prepare: async () => ({ path: `/api/workshops/${workshopId}/designs/${(await freshDesign()).id}/duplicate` }),
+    expected: editors(201),
+  },
+  {
+    name: 'GET plan',
+    method: 'get',
+    prepare: async () => ({ path: `/api/workshops/${workshopId}/designs/${(await freshDesign()).id}/plan` }),
+    expected: members(200),
+  },
+];
+
+describe('role matrix', () => {
+  it('covers every route of the API table in DEVELOPERS.md that needs a signed-in user', () => {
+    // signup, login and health are open to anyone and have their own tests (auth.test.ts, errors.test.ts).
+    expect(CASES).toHaveLength(13);
+  });
+
+  for (const c of CASES) {
+    for (const who of WHO) {
+      it(`${c.name} as ${who} → ${c.expected[who]}`, async () => {
+        const { path, body, check } = await c.prepare();
+        const agent: Agent | ReturnType<typeof request> =
+          who === 'signedOut'
+            ? request(t.app)
+            : c.freshSession
+              ? await signIn(t.app, who === 'outsider' ? outsiderEmail : DEMO[who], who === 'outsider' ? 'a-long-password-1' : undefined)
+              : agents[who];
+        let req = agent[c.method](path);
+        if (body !== undefined) req = req.send(body as object);
+        const res = await req;
+        expect(res.status, JSON.stringify(res.body)).toBe(c.expected[who]);
+        if (res.status >= 400) {
+          expect(res.body.error.code).toBe({ 401: 'not_signed_in', 403: 'forbidden' }[res.status as 401 | 403]);
+          expect(typeof res.body.error.message).toBe('string');
+        }
+        await check?.(res.status);
+      });
+    }
+  }
+});
