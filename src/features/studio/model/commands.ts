@@ -240,18 +240,22 @@ export const setOpeningFaceCommand: Command<{ index: number; face: Face }> = {
   },
 };
 
-/** One click: set a port's length to the length that reaches its target tuning (figures panel). */
-export const applyPortLengthCommand: Command<{ index: number; lengthMm: number }> = {
+/** One click: set the ports' length to the length that reaches the target tuning (figures panel). */
+export const applyPortLengthCommand: Command<{ indexes: readonly number[]; lengthMm: number }> = {
   name: 'applyPortLength',
   edits: true,
-  perform(doc, sel, { index, lengthMm }) {
-    const o = doc.openings[index];
-    if (!o || o.type !== 'port' || !(lengthMm > 0)) return null;
+  perform(doc, sel, { indexes, lengthMm }) {
+    if (!(lengthMm > 0)) return null;
     const length = Math.round(lengthMm * 10) / 10;
-    if (length === o.length) return null;
     const openings = doc.openings.slice();
-    openings[index] = { ...o, length };
-    return { doc: { ...doc, openings }, selection: sel, history: 'record' };
+    let changed = false;
+    for (const index of indexes) {
+      const o = openings[index];
+      if (!o || o.type !== 'port' || o.length === length) continue;
+      openings[index] = { ...o, length };
+      changed = true;
+    }
+    return changed ? { doc: { ...doc, openings }, selection: sel, history: 'record' } : null;
   },
 };
 

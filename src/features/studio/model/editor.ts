@@ -112,6 +112,7 @@ export class StudioEditor {
   private listeners = new Set<Listener>();
   private spaceHeld = false;
   private dragCount = 0;
+  private quiet = false;
   private readonly onCommit?: (doc: StudioDoc) => void;
 
   constructor(doc: StudioDoc, options: EditorOptions = {}) {
@@ -184,7 +185,7 @@ export class StudioEditor {
     }
     const nextHistory = H.recordChange(history, doc, result.doc, selection, result.selection, result.history);
     this.set({ doc: result.doc, selection: result.selection, history: nextHistory, docVersion: this.state.docVersion + 1 });
-    if (result.history === 'record') this.onCommit?.(result.doc);
+    if (result.history === 'record' && !this.quiet) this.onCommit?.(result.doc);
     return true;
   }
 
@@ -212,8 +213,8 @@ export class StudioEditor {
   resizeBox(axis: Axis, sizeMm: number): boolean {
     return this.run(resizeBoxCommand, { axis, sizeMm, history: 'record' });
   }
-  applyPortLength(index: number, lengthMm: number): boolean {
-    return this.run(applyPortLengthCommand, { index, lengthMm });
+  applyPortLength(indexes: readonly number[], lengthMm: number): boolean {
+    return this.run(applyPortLengthCommand, { indexes, lengthMm });
   }
 
   /**
@@ -231,7 +232,13 @@ export class StudioEditor {
       this.set({ doc, docVersion: this.state.docVersion + 1 });
       return true;
     }
-    return this.run(replaceDocCommand, { doc });
+    // Not reported back through onCommit: the caller already has this design.
+    this.quiet = true;
+    try {
+      return this.run(replaceDocCommand, { doc });
+    } finally {
+      this.quiet = false;
+    }
   }
 
   undo(): boolean {

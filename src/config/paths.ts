@@ -1,0 +1,25 @@
+/** Every client URL, built in one place (bulletproof-react's paths.getHref pattern). */
+export const paths = {
+  home: { path: '/', getHref: () => '/' },
+  signIn: {
+    path: '/sign-in',
+    getHref: (redirectTo?: string | null) =>
+      redirectTo && redirectTo !== '/' ? `/sign-in?redirectTo=${encodeURIComponent(redirectTo)}` : '/sign-in',
+  },
+  signUp: { path: '/sign-up', getHref: () => '/sign-up' },
+  workshops: { path: '/workshops', getHref: () => '/workshops' },
+  workshop: { path: '/w/:workshopId', getHref: (workshopId: number) => `/w/${workshopId}` },
+  designs: { path: '/w/:workshopId/designs', getHref: (workshopId: number) => `/w/${workshopId}/designs` },
+  design: {
+    path: '/w/:workshopId/designs/:designId',
+    getHref: (workshopId: number, designId: number) => `/w/${workshopId}/designs/${designId}`,
+  },
+  members: { path: '/w/:workshopId/members', getHref: (workshopId: number) => `/w/${workshopId}/members` },
+} as const;
+
+/** Only same-site relative paths may be used as a redirect target (no `//evil.example`). */
+export function safeRedirect(target: string | null | undefined, fallback = '/'): string {
+  if (!target || !target.startsWith('/') || target.startsWith('//') || target.startsWith('/\\')) return fallback;
+  if (target.startsWith(paths.signIn.path) || target.startsWith(paths.signUp.path)) return fallback;
+  return target;
+}

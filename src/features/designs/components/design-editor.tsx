@@ -1,0 +1,219 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useQueryClient } from '@tanstack/react-query';
+import { useEffect, useRef, useState } from 'react';
+import { FormProvider, useForm } from 'react-hook-form';
+import type { DesignDto } from '../../../../shared/schemas/api.schema';
+import { designSchema, type Design, type DesignInput } from '../../../../shared/schemas/design.schema';
+import { LeaveGuard } from '../../../components/leave-guard';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { Card } from '../../../components/ui/card';
+import { Dialog } from '../../../components/ui/dialog';
+import { isApiError } from '../../../lib/api-client';
+import { describeFormPath, type FieldMessage } from '../../../lib/field-paths';
+import { formatDateTime, formatRelativeTime } from '../../../lib/format';
+import { applyApiError } from '../../../lib/form-errors';
+import { designQueryOptions } from '../api/get-design';
+import { useUpdateDesign } from '../api/update-design';
+import { keepFaceCoords } from '../defaults';
+import { BoxSection } from './box-section';
+import { BracesSection } from './braces-section';
+import { LiningSection } from './lining-section';
+import { OpeningsSection } from './openings-section';
+import { PlanSummary } from './plan-summary';
+
+/** What is sent: only the two coordinates each opening's face uses. */
+export function designForSave(design: Design): Design {
+  return { ...design, openings: design.openings.map(keepFaceCoords) };
+}
+
+interface Conflict {
+  /** The version now on the server, or null when it could not be loaded. */
+  latest: DesignDto | null;
+  mine: Design;
+}
+
+const FORM_ID = 'design-form';
+
+/**
+ * The design page's form (the canvas comes later): every field of the design JSON, saved with the
+ * version it was loaded from. Viewers and makers get the same page read-only, without a save control.
+ */
+export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: number; initial: DesignDto; canEdit: boolean }) {
+  const queryClient = useQueryClient();
+  const [base, setBase] = useState<DesignDto>(initial);
+  const [serverMessages, setServerMessages] = useState<FieldMessage[]>([]);
+  const [conflict, setConflict] = useState<Conflict | null>(null);
+  const [savedAt, setSavedAt] = useState<Date | null>(null);
+  const update = useUpdateDesign(workshopId, initial.id);
+
+  const form = useForm<DesignInput, unknown, Design>({
+    resolver: zodResolver(designSchema),
+    defaultValues: initial.design,
+    mode: 'onSubmit',
+    reValidateMode: 'onChange',
+  });
+  const { isDirty, isSubmitting } = form.formState;
+  const busy = isSubmitting || update.isPending;
+
+  const adopt = (dto: DesignDto) => {
+    setBase(dto);
+    form.reset(dto.design);
+  };
+
+  const save = async (design: Design, version: number) => {
+    setServerMessages([]);
+    try {
+      const saved = await update.mutateAsync({ version, design: designForSave(design) });
+      adopt(saved);
+      setConflict(null);
+      setSavedAt(new Date());
+    } catch (error) {
+      if (isApiError(error) && error.isConflict) {
+        const latest = await queryClient
+          .fetchQuery({ ...designQueryOptions(workshopId, initial.id), staleTime: 0 })
+          .catch(() => null);
+        setConflict({ latest, mine: design });
+        return;
+      }
+      setConflict(null);
+      setServerMessages(applyApiError(error, form.setError, { stripPrefix: 'design' }));
+    }
+  };
+
+  const onSubmit = form.handleSubmit((design) => save(design, base.version));
+
+  // Ctrl+S / Cmd+S saves, as in any editor.
+  const submitRef = useRef(onSubmit);
+  submitRef.current = onSubmit;
+  useEffect(() => {
+    if (!canEdit) return;
+    const onKey = (event: KeyboardEvent) => {
+      if ((event.ctrlKey || event.metaKey) && event.key.toLowerCase() === 's') {
+        event.preventDefault();
+        void submitRef.current();
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [canEdit]);
+
+  const rootError = form.formState.errors.root?.server?.message;
+
+  return (
+    <FormProvider {...form}>
+      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+        <form id={FORM_ID} onSubmit={onSubmit} noValidate className="min-w-0 space-y-5" aria-label="Design">
+          {!canEdit ? (
+            <Alert tone="info" title="Read only">
+              Your role in this workshop lets you read this design but not change it.
+            </Alert>
+          ) : null}
+          {serverMessages.length > 0 || rootError ? (
+            <Alert tone="error" title="Not saved">
+              {serverMessages.length > 0 ? (
+                <>
+                  <p>Please correct the fields marked below:</p>
+                  <ul className="mt-1 list-disc space-y-0.5 pl-5">
+                    {serverMessages.map((m) => (
+                      <li key={m.formPath}>
+                        {describeFormPath(m.formPath)}: {m.message}
+                      </li>
+                    ))}
+                  </ul>
+                </>
+              ) : (
+                rootError
+              )}
+            </Alert>
+          ) : null}
+          <fieldset disabled={!canEdit} className="min-w-0 space-y-5">
+            <BoxSection readOnly={!canEdit} />
+            <BracesSection readOnly={!canEdit} />
+            <OpeningsSection readOnly={!canEdit} />
+            <LiningSection readOnly={!canEdit} />
+          </fieldset>
+        </form>
+
+        <aside className="space-y-4 lg:sticky lg:top-20">
+          <Card bodyClassName="px-5 py-4">
+            <div className="text-sm" data-testid="save-status">
+              {isDirty ? (
+                <p className="flex items-center gap-2 text-amber-800">
+                  <span className="size-2 rounded-full bg-amber-500" /> Unsaved changes
+                </p>
+              ) : (
+                <p className="flex items-center gap-2 text-zinc-600">
+                  <span className="size-2 rounded-full bg-accent-500" />
+                  {savedAt ? 'All changes saved' : 'No changes'}
+                </p>
+              )}
+              <p className="mt-1 text-[13px] text-zinc-500" title={formatDateTime(base.updatedAt)}>
+                Version {base.version} · saved {formatRelativeTime(base.updatedAt)}
+                {base.updatedBy ? ` by ${base.updatedBy}` : ''}
+              </p>
+            </div>
+            {canEdit ? (
+              <div className="mt-4 flex gap-2">
+                <Button type="submit" form={FORM_ID} variant="primary" className="flex-1" busy={busy} disabled={!isDirty && !busy}>
+                  Save design
+                </Button>
+                <Button
+                  disabled={!isDirty || busy}
+                  onClick={() => {
+                    form.reset(base.design);
+                    setServerMessages([]);
+                  }}
+                >
+                  Discard
+                </Button>
+              </div>
+            ) : null}
+          </Card>
+          <PlanSummary workshopId={workshopId} designId={base.id} version={base.version} dirty={isDirty} />
+        </aside>
+      </div>
+
+      <LeaveGuard when={canEdit && isDirty && !busy} />
+
+      <Dialog
+        open={conflict !== null}
+        onClose={() => setConflict(null)}
+        role="alertdialog"
+        title="Someone else saved this design"
+        footer={
+          conflict?.latest ? (
+            <>
+              <Button onClick={() => setConflict(null)} disabled={busy}>
+                Cancel
+              </Button>
+              <Button onClick={() => conflict.latest && (adopt(conflict.latest), setConflict(null))} disabled={busy}>
+                Reload their version
+              </Button>
+              <Button variant="primary" busy={busy} onClick={() => conflict.latest && save(conflict.mine, conflict.latest.version)}>
+                Keep mine (overwrite)
+              </Button>
+            </>
+          ) : (
+            <Button onClick={() => setConflict(null)}>Close</Button>
+          )
+        }
+      >
+        {conflict?.latest ? (
+          <div className="space-y-2">
+            <p>
+              Since you opened it, version {conflict.latest.version} was saved
+              {conflict.latest.updatedBy ? ` by ${conflict.latest.updatedBy}` : ''}, {formatRelativeTime(conflict.latest.updatedAt)}.
+            </p>
+            <p>
+              <strong className="text-zinc-900">Reload their version</strong> drops your changes.{' '}
+              <strong className="text-zinc-900">Keep mine</strong> saves your version over theirs.
+            </p>
+          </div>
+        ) : (
+          <p>The newer version could not be loaded just now. Your changes are still here; try saving again in a moment.</p>
+        )}
+      </Dialog>
+    </FormProvider>
+  );
+}

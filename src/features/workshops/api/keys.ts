@@ -1,0 +1,4 @@
+export const workshopKeys = {
+  all: ['workshops'] as const,
+  members: (workshopId: number) => [...workshopKeys.all, workshopId, 'members'] as const,
+};

@@ -1,0 +1,43 @@
+/** Display formatting. Lengths are millimetres inside; shown with their unit. */
+
+const numberFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 1 });
+
+/** `1234.5` → `1,234.5`; at most one decimal for millimetres. */
+export function formatNumber(value: number, maximumFractionDigits = 1): string {
+  if (maximumFractionDigits === 1) return numberFormat.format(value);
+  return new Intl.NumberFormat('en-GB', { maximumFractionDigits }).format(value);
+}
+
+/** Outer size as W × H × D, e.g. `220 × 360 × 260 mm`. */
+export function formatSizeMm(widthMm: number, heightMm: number, depthMm: number): string {
+  return `${formatNumber(widthMm)} × ${formatNumber(heightMm)} × ${formatNumber(depthMm)} mm`;
+}
+
+const UNITS: Array<[Intl.RelativeTimeFormatUnit, number]> = [
+  ['year', 365 * 24 * 3600],
+  ['month', 30 * 24 * 3600],
+  ['week', 7 * 24 * 3600],
+  ['day', 24 * 3600],
+  ['hour', 3600],
+  ['minute', 60],
+];
+
+/** "3 minutes ago", "yesterday", "just now"; `now` is injected so it can be tested. */
+export function formatRelativeTime(iso: string, now: Date = new Date()): string {
+  const then = new Date(iso);
+  if (Number.isNaN(then.getTime())) return '—';
+  const seconds = Math.round((then.getTime() - now.getTime()) / 1000);
+  if (Math.abs(seconds) < 45) return 'just now';
+  const rtf = new Intl.RelativeTimeFormat('en-GB', { numeric: 'auto' });
+  for (const [unit, size] of UNITS) {
+    if (Math.abs(seconds) >= size) return rtf.format(Math.round(seconds / size), unit);
+  }
+  return rtf.format(Math.round(seconds / 60), 'minute');
+}
+
+/** Full date and time for a tooltip, e.g. `2 Dec 2026, 14:05`. */
+export function formatDateTime(iso: string): string {
+  const date = new Date(iso);
+  if (Number.isNaN(date.getTime())) return '';
+  return new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' }).format(date);
+}
