@@ -1,0 +1,59 @@
+/**
+ * Search budget. The search counts its work (free rectangles looked at) and stops at a work limit
+ * derived from the time limit, so the same input and seed give the same layout on any machine that is
+ * fast enough; the injected clock and the cancel callback are checked as a hard stop.
+ */
+export const work = { n: 0 };
+
+/** Free-rectangle checks per millisecond assumed when turning a time limit into a work limit. */
+export const WORK_PER_MS = 20_000;
+
+export class Budget {
+  private readonly start: number;
+  private readonly deadline: number;
+  private stopped = false;
+  private calls = 0;
+  readonly workLimit: number;
+  readonly workStart: number;
+
+  constructor(
+    readonly timeLimitMs: number,
+    private readonly now: (() => number) | undefined,
+    private readonly shouldStop: (() => boolean) | undefined,
+    workPerMs = WORK_PER_MS,
+    private readonly onTick?: () => void,
+  ) {
+    this.start = now ? now() : 0;
+    this.deadline = this.start + timeLimitMs;
+    this.workStart = work.n;
+    this.workLimit = work.n + timeLimitMs * workPerMs;
+  }
+
+  /** True once the work or time is used up or the caller asked to stop. */
+  expired(): boolean {
+    if (this.stopped) return true;
+    if (work.n >= this.workLimit) return (this.stopped = true);
+    if ((++this.calls & 7) === 0 || this.calls < 8) {
+      if ((this.calls & 255) === 0) this.onTick?.();
+      if (this.shouldStop?.()) return (this.stopped = true);
+      if (this.now && this.now() >= this.deadline) return (this.stopped = true);
+    }
+    return false;
+  }
+
+  /** Share of the budget used, 0..1. */
+  fraction(): number {
+    const byWork = (work.n - this.workStart) / Math.max(1, this.workLimit - this.workStart);
+    const byTime = this.now && this.timeLimitMs > 0 ? (this.now() - this.start) / this.timeLimitMs : 0;
+    return Math.min(1, Math.max(byWork, byTime));
+  }
+
+  /** Milliseconds since the start (0 without a clock). */
+  elapsedMs(): number {
+    return this.now ? this.now() - this.start : 0;
+  }
+
+  cancelled(): boolean {
+    return this.shouldStop?.() ?? false;
+  }
+}
