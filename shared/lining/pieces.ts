@@ -11,7 +11,7 @@
  */
 import type { Design, Face } from '../schemas/design.schema.js';
 import type { LiningPiecePlan, LiningTotals, Point, Warning } from '../schemas/plan.types.js';
-import { polygonBounds, shapeArea, subtractHolesFromRect, translatePolygon, type Rect } from '../geometry/polygon.js';
+import { polygonBounds, rectPolygon, shapeArea, subtractHolesFromRect, translatePolygon, type Rect } from '../geometry/polygon.js';
 import { AXIS_INDEX, FACE_NORMAL, boxIntersection, faceRectOf, type Box3, type Frame, type Vec3 } from '../cabinet/frame.js';
 import { barBraceBox, cutoutPolygon, portOuterCutout, throughCutout, type Cutout } from '../cabinet/elements.js';
 
@@ -112,18 +112,11 @@ export function planLining(design: Design, frame: Frame): LiningResult {
 
     // Holes in face coordinates: openings on this face, and bar braces passing through the lining layer.
     const holePolys: Point[][] = cutoutsOnFace(design, frame, face, lining.portClearance).map(cutoutPolygon);
+    const barRects: Rect[] = [];
     for (const b of design.braces) {
       if (b.type !== 'bar') continue;
       const hit = boxIntersection(barBraceBox(frame, b), layer);
-      if (hit) {
-        const r = faceRectOf(frame, face, hit);
-        holePolys.push([
-          [r.minX, r.minY],
-          [r.maxX, r.minY],
-          [r.maxX, r.maxY],
-          [r.minX, r.maxY],
-        ]);
-      }
+      if (hit) barRects.push(faceRectOf(frame, face, hit));
     }
 
     const cells: Rect[] = [];
@@ -155,7 +148,17 @@ export function planLining(design: Design, frame: Frame): LiningResult {
       const ox = cell.minX - c / 2;
       const oy = cell.minY - c / 2;
       const rect: Rect = { minX: 0, minY: 0, maxX: w + c, maxY: h + c };
-      const holes = holePolys.map((p) => translatePolygon(p, -ox, -oy));
+      // A bar reaching a piece's edge runs on through the crush allowance there, so it cuts the piece clean.
+      const reach = c / 2 + 1;
+      const bars = barRects.map((r) =>
+        rectPolygon({
+          minX: r.minX <= cell.minX + 1e-6 ? cell.minX - reach : r.minX,
+          minY: r.minY <= cell.minY + 1e-6 ? cell.minY - reach : r.minY,
+          maxX: r.maxX >= cell.maxX - 1e-6 ? cell.maxX + reach : r.maxX,
+          maxY: r.maxY >= cell.maxY - 1e-6 ? cell.maxY + reach : r.maxY,
+        }),
+      );
+      const holes = [...holePolys, ...bars].map((p) => translatePolygon(p, -ox, -oy));
       const shapes = subtractHolesFromRect(rect, holes);
       if (shapes.length === 0) {
         warnings.push({ code: 'lining_covered', message: `${base}: a ${r3(w)} × ${r3(h)} mm piece is wholly cut away by holes and is left out`, field: 'lining' });
