@@ -92,8 +92,8 @@ describe('commands', () => {
 
   it('applyPortLength sets the port length (to 0.1 mm) and refuses non-ports', () => {
     const doc = bookshelf();
-    expect(applyPortLengthCommand.perform(doc, null, { index: 2, lengthMm: 143.26 })!.doc.openings[2]).toMatchObject({ length: 143.3 });
-    expect(applyPortLengthCommand.perform(doc, null, { index: 0, lengthMm: 100 })).toBeNull();
+    expect(applyPortLengthCommand.perform(doc, null, { indexes: [2], lengthMm: 143.26 })!.doc.openings[2]).toMatchObject({ length: 143.3 });
+    expect(applyPortLengthCommand.perform(doc, null, { indexes: [0], lengthMm: 100 })).toBeNull();
   });
 
   it('deleting drops the item and the selection; replacing keeps a selection that still exists', () => {

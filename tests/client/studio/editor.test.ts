@@ -150,7 +150,7 @@ describe('read-only (makers and viewers)', () => {
     expect(ed.addBrace('shelf')).toBe(false);
     expect(ed.addOpening('driver')).toBe(false);
     expect(ed.setField(['outer', 'width'], 300)).toBe(false);
-    expect(ed.applyPortLength(2, 150)).toBe(false);
+    expect(ed.applyPortLength([2], 150)).toBe(false);
     expect(ed.undo()).toBe(false);
     expect(ed.doc).toBe(before);
     expect(ed.getState().history.undo).toHaveLength(0);

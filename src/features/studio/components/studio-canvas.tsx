@@ -259,8 +259,8 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
     const { h: ha, v: va } = VIEW_AXES[view];
     const p0 = toScreen(view, 0, 0);
     const p1 = toScreen(view, l.w, l.h);
-    const hBelow = view !== 'top';
-    const vRight = view === 'side';
+    const hBelow = true;
+    const vRight = view !== 'front';
     const hAt = (tier: number) => (hBelow ? p0.y + DIM_GAP + tier * DIM_TIER : p1.y - DIM_GAP - tier * DIM_TIER);
     const vAt = (tier: number) => (vRight ? p1.x + DIM_GAP + tier * DIM_TIER : p0.x - DIM_GAP - tier * DIM_TIER);
     const out = [
@@ -318,8 +318,8 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
 
   const drawTitle = (view: ViewName) => {
     const l = layout.views[view];
-    const atTop = view !== 'top';
-    const p = atTop ? toScreen(view, 0, l.h) : toScreen(view, 0, 0);
+    const atTop = true;
+    const p = toScreen(view, 0, l.h);
     const active = state.activeView === view;
     return (
       <Text
@@ -344,6 +344,7 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
       style={{ background: CANVAS_BG, cursor }}
       tabIndex={0}
       data-testid="studio-canvas"
+      data-camera={JSON.stringify(camera)}
       aria-label="Cabinet drawing: front, side section and top section"
     >
       {size.width > 0 && size.height > 0 && (

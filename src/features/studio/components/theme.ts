@@ -31,5 +31,6 @@ export const ROLE_STYLE: Record<Role, RoleStyle> = {
   tube: { fill: '#b7c6d4', stroke: '#35536e', strokeWidth: 1 },
   terminal: { fill: '#e3e6ea', stroke: '#4a5563', strokeWidth: 1 },
   lead: { fill: '#e3e6ea', stroke: '#4a5563', strokeWidth: 1 },
+  gap: { fill: '#fdfcfa', stroke: '#3c4858', strokeWidth: 1 },
   edge: { stroke: 'rgba(0,0,0,0)', strokeWidth: 1 },
 };

@@ -3,8 +3,9 @@
  * lines (the middle of the face, the centre of other items) when the pointer is close to one.
  */
 
-/** 1 in = 25.4 mm exactly (International Yard and Pound Agreement, 1959; REFERENCES.md §8). */
-export const MM_PER_INCH = 25.4;
+import { MM_PER_INCH } from '../../../../shared/units/index';
+
+export { MM_PER_INCH };
 
 export type GridId = 'off' | 'mm1' | 'mm5' | 'mm10' | 'in16';
 

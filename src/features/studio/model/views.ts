@@ -1,6 +1,6 @@
 /**
- * The three drawings as plain primitives in millimetres, laid out in one world (third-angle
- * arrangement: the top section above the front, the side section to its right):
+ * The three drawings as plain primitives in millimetres, laid out side by side in one world, bottoms
+ * aligned (a row uses a wide screen better than a projection cross):
  * - front: seen from the front, h = x, v = y (back-face items drawn dashed, seen through);
  * - side: section at mid-width seen from the right, h = z (front at the left), v = y;
  * - top: section at mid-height seen from above, h = x, v = z (front at the bottom).
@@ -38,6 +38,8 @@ export type Role =
   | 'tube'
   | 'terminal'
   | 'lead'
+  /** A cut-out seen edge-on: a gap through the wall. */
+  | 'gap'
   | 'edge';
 
 export type Prim =
@@ -64,19 +66,22 @@ export interface WorldLayout {
 
 export function layoutViews(doc: StudioDoc): WorldLayout {
   const { width: W, height: H, depth: D } = doc.outer;
-  const gap = Math.max(90, 0.3 * Math.max(W, H, D));
+  const gap = Math.max(110, 0.22 * Math.max(W, H, D));
   const views: Record<ViewName, ViewLayout> = {
     front: { view: 'front', ox: 0, oy: 0, w: W, h: H },
     side: { view: 'side', ox: W + gap, oy: 0, w: D, h: H },
-    top: { view: 'top', ox: 0, oy: H + gap, w: W, h: D },
+    top: { view: 'top', ox: W + gap + D + gap, oy: 0, w: W, h: D },
   };
-  const margin = gap * 0.6;
+  const margin = gap * 0.55;
   return {
     views,
     gapMm: gap,
-    bounds: { minX: -margin, minY: -margin, maxX: W + gap + D + margin * 0.5, maxY: H + gap + D + margin * 0.5 },
+    bounds: { minX: -margin, minY: -margin * 0.8, maxX: 2 * W + D + 2 * gap + margin, maxY: Math.max(H, D) + margin * 0.6 },
   };
 }
+
+/** Which lining covers a corner where two lined faces meet (PRODUCT.md §3): back, then sides, then top and bottom. */
+const LINING_RANK: Record<Face, number> = { back: 3, left: 2, right: 2, top: 1, bottom: 1, front: 0 };
 
 type Rect2 = { x: number; y: number; w: number; h: number };
 
@@ -105,10 +110,15 @@ export function projectView(doc: StudioDoc, view: ViewName): Prim[] {
       if (n.axis !== ha && n.axis !== va) continue;
       const along = n.axis === ha ? va : ha;
       const lo = n.side === 'min' ? cav[n.axis].min : cav[n.axis].max - f;
-      const r =
-        n.axis === ha
-          ? boxRect(lo, lo + f, cav[along].min, cav[along].max)
-          : boxRect(cav[along].min, cav[along].max, lo, lo + f);
+      // Stop where a lining that covers the corner meets this one.
+      const lined = (face2: Face) => doc.lining!.faces.includes(face2) && LINING_RANK[face2] > LINING_RANK[face];
+      const ends = (['min', 'max'] as const).map((side) => {
+        const other = (Object.keys(LINING_RANK) as Face[]).find((x) => faceNormal(x).axis === along && faceNormal(x).side === side)!;
+        return lined(other) ? f : 0;
+      });
+      const a0 = cav[along].min + ends[0]!;
+      const a1 = cav[along].max - ends[1]!;
+      const r = n.axis === ha ? boxRect(lo, lo + f, a0, a1) : boxRect(a0, a1, lo, lo + f);
       prims.push({ kind: 'rect', role: 'lining', ...r });
     }
   }
@@ -189,7 +199,7 @@ export function projectView(doc: StudioDoc, view: ViewName): Prim[] {
     const nMin = Math.min(a, bEnd);
     const nMax = Math.max(a, bEnd);
     const r = n.axis === ha ? boxRect(nMin, nMax, centre - ext / 2, centre + ext / 2) : boxRect(centre - ext / 2, centre + ext / 2, nMin, nMax);
-    prims.push({ kind: 'rect', role: o.type === 'port' ? 'tube' : role, ...r, hit, dashed: !section });
+    prims.push({ kind: 'rect', role: o.type === 'port' ? 'tube' : 'gap', ...r, hit, dashed: !section });
     if (o.type === 'port' && o.shape === 'round') {
       // The bore inside the tube wall.
       const bore = o.diameter ?? 0;

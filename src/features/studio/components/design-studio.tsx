@@ -1,0 +1,267 @@
+/**
+ * The design studio: the canvas with its three drawings, a small palette, the selected item's values,
+ * live figures from the cabinet engine and the lining laid flat. The design JSON is the one document;
+ * the page passes it in and hears about every committed change through onChange.
+ */
+import { useEffect, useMemo, useRef, useState } from 'react';
+import type { Warning } from '../../../../shared/schemas/plan.types';
+import { BRACE_KINDS, OPENING_KINDS } from '../model/commands';
+import { StudioEditor } from '../model/editor';
+import { EMPTY_FIGURES, nextFigures, type FiguresState, type PlanOutcome } from '../model/figures';
+import { planDesign } from '../model/plan';
+import { GRIDS, type GridId } from '../model/snapping';
+import type { StudioDoc, UnitSystem } from '../model/types';
+import { hitForField, type HitId } from '../model/views';
+import { FiguresPanel } from './figures-panel';
+import { Inspector } from './inspector';
+import { LiningView } from './lining-view';
+import { StudioCanvas } from './studio-canvas';
+import { useEditorState } from './use-editor';
+
+export interface DesignStudioProps {
+  design: StudioDoc;
+  readOnly: boolean;
+  units: UnitSystem;
+  /** Called once per committed change (a drag when it ends, a typed value, a palette click, undo/redo). */
+  onChange(design: StudioDoc): void;
+  onUnitsChange(units: UnitSystem): void;
+  className?: string;
+}
+
+type Tab = 'drawing' | 'lining';
+
+const isTyping = (t: EventTarget | null) =>
+  t instanceof HTMLElement && (t.isContentEditable || ['INPUT', 'SELECT', 'TEXTAREA'].includes(t.tagName) || !!t.closest('dialog'));
+
+function ToolButton(props: React.ButtonHTMLAttributes<HTMLButtonElement> & { pressed?: boolean }) {
+  const { pressed, className, ...rest } = props;
+  return (
+    <button
+      type="button"
+      aria-pressed={pressed}
+      className={`h-7 rounded px-2 text-[12.5px] text-zinc-700 hover:bg-zinc-100 disabled:text-zinc-300 disabled:hover:bg-transparent ${
+        pressed ? 'bg-zinc-200/70 font-bold text-zinc-900' : ''
+      } ${className ?? ''}`}
+      {...rest}
+    />
+  );
+}
+
+function Divider() {
+  return <span aria-hidden className="mx-1 h-5 w-px bg-zinc-200" />;
+}
+
+export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange, className }: DesignStudioProps) {
+  const onChangeRef = useRef(onChange);
+  onChangeRef.current = onChange;
+  const emitted = useRef<StudioDoc | null>(null);
+  const [editor] = useState(
+    () =>
+      new StudioEditor(design, {
+        readOnly,
+        units,
+        grid: units === 'in' ? 'in16' : 'mm1',
+        onCommit: (doc) => {
+          emitted.current = doc;
+          onChangeRef.current(doc);
+        },
+      }),
+  );
+  const state = useEditorState(editor);
+  const [tab, setTab] = useState<Tab>('drawing');
+  const [fitRequest, setFitRequest] = useState(0);
+
+  // The page's design is the source when it changes from outside (the side form, a reload).
+  useEffect(() => {
+    if (design !== emitted.current && design !== editor.doc) editor.replaceDoc(design);
+  }, [design, editor]);
+  useEffect(() => editor.setReadOnly(readOnly), [readOnly, editor]);
+  useEffect(() => {
+    editor.setUnits(units);
+    const g = editor.getState().grid;
+    if (units === 'in' && g.startsWith('mm')) editor.setGrid('in16');
+    if (units === 'mm' && g === 'in16') editor.setGrid('mm1');
+  }, [units, editor]);
+
+  // Live figures: the engine runs on every change of the document; errors keep the last good figures.
+  const figuresRef = useRef<FiguresState>(EMPTY_FIGURES);
+  const outcome = useMemo<PlanOutcome>(() => planDesign(state.doc) as PlanOutcome, [state.doc]);
+  const figures = useMemo(() => (figuresRef.current = nextFigures(figuresRef.current, state.doc, outcome)), [outcome, state.doc]);
+  const lastPlan = useRef(outcome.ok ? outcome.plan : null);
+  if (outcome.ok) lastPlan.current = outcome.plan;
+
+  const warnings = useMemo(() => {
+    const m = new Map<HitId, string[]>();
+    const add = (field: string | undefined, msg: string) => {
+      const hit = hitForField(field);
+      if (hit) m.set(hit, [...(m.get(hit) ?? []), msg]);
+    };
+    if (figures.error) for (const [f, msg] of Object.entries(figures.error.fields)) add(f, msg);
+    else for (const w of figures.figures?.warnings ?? []) add(w.field, w.message);
+    return m;
+  }, [figures]);
+
+  // Keys: anywhere on the page except while typing in a field or a dialog.
+  useEffect(() => {
+    const down = (e: KeyboardEvent) => {
+      if (isTyping(e.target) || tab !== 'drawing') return;
+      if (editor.keyDown(e)) e.preventDefault();
+    };
+    const up = (e: KeyboardEvent) => editor.keyUp(e);
+    window.addEventListener('keydown', down);
+    window.addEventListener('keyup', up);
+    return () => {
+      window.removeEventListener('keydown', down);
+      window.removeEventListener('keyup', up);
+    };
+  }, [editor, tab]);
+
+  const sel = state.selection;
+  const selHit = sel && sel.kind !== 'box' ? (`${sel.kind}:${sel.index}` as HitId) : null;
+  const showWarning = (w: Warning) => {
+    const hit = hitForField(w.field);
+    if (!hit) return;
+    const [kind, index] = hit.split(':') as ['brace' | 'opening', string];
+    setTab('drawing');
+    editor.select({ kind, index: Number(index) });
+  };
+  const scale = 3.7795 / state.camera.zoom; // CSS px per mm at 96 dpi (CSS Values 4: 1 in = 96 px)
+
+  return (
+    <div
+      className={`flex flex-col overflow-hidden rounded-lg border border-zinc-200 bg-white ${className ?? 'h-[calc(100vh-9rem)] min-h-[560px]'}`}
+      data-testid="design-studio"
+      data-readonly={readOnly || undefined}
+    >
+      <div className="flex min-h-11 flex-wrap items-center gap-0.5 border-b border-zinc-200 bg-zinc-50/80 px-2 py-1" role="toolbar" aria-label="Studio">
+        <div className="mr-1 flex rounded border border-zinc-200 bg-white p-0.5" role="tablist">
+          {(['drawing', 'lining'] as const).map((t) => (
+            <button
+              key={t}
+              role="tab"
+              type="button"
+              aria-selected={tab === t}
+              onClick={() => setTab(t)}
+              className={`h-6 rounded-sm px-2.5 text-[12.5px] ${tab === t ? 'bg-zinc-800 text-white' : 'text-zinc-600 hover:bg-zinc-100'}`}
+            >
+              {t === 'drawing' ? 'Drawing' : 'Lining'}
+            </button>
+          ))}
+        </div>
+        {!readOnly && tab === 'drawing' && (
+          <>
+            <Divider />
+            <span className="px-1 text-[11px] font-bold uppercase tracking-wider text-zinc-400">Add</span>
+            {BRACE_KINDS.map((b) => (
+              <ToolButton key={b.kind} onClick={() => editor.addBrace(b.kind)} title={`Add a ${b.label.toLowerCase()}`}>
+                {b.label}
+              </ToolButton>
+            ))}
+            <span aria-hidden className="mx-0.5 text-zinc-300">·</span>
+            {OPENING_KINDS.map((o) => (
+              <ToolButton key={o.kind} onClick={() => editor.addOpening(o.kind)} title={`Add a ${o.label.toLowerCase()}`}>
+                {o.label}
+              </ToolButton>
+            ))}
+            <Divider />
+            <ToolButton onClick={() => editor.deleteSelection()} disabled={!selHit} title="Delete the selection (Delete)">
+              Delete
+            </ToolButton>
+            <ToolButton onClick={() => editor.undo()} disabled={state.history.undo.length === 0} title="Undo (Ctrl+Z)">
+              Undo
+            </ToolButton>
+            <ToolButton onClick={() => editor.redo()} disabled={state.history.redo.length === 0} title="Redo (Ctrl+Shift+Z)">
+              Redo
+            </ToolButton>
+          </>
+        )}
+        <div className="ml-auto flex items-center gap-1.5">
+          {readOnly && (
+            <span className="rounded bg-zinc-100 px-2 py-0.5 text-[11.5px] text-zinc-600" data-testid="studio-readonly">
+              Read only
+            </span>
+          )}
+          {tab === 'drawing' && (
+            <>
+              <label className="flex items-center gap-1 text-[12px] text-zinc-500">
+                Snap
+                <select
+                  className="h-7 rounded border border-zinc-300 bg-white px-1 text-[12.5px] text-zinc-800"
+                  value={state.grid}
+                  onChange={(e) => editor.setGrid(e.target.value as GridId)}
+                  aria-label="Snap grid"
+                >
+                  {GRIDS.map((g) => (
+                    <option key={g.id} value={g.id}>
+                      {g.label}
+                    </option>
+                  ))}
+                </select>
+              </label>
+              <ToolButton onClick={() => setFitRequest((n) => n + 1)} title="Fit the drawings to the window">
+                Fit
+              </ToolButton>
+              <span className="w-14 text-right font-mono text-[11.5px] tabular-nums text-zinc-500" title="Scale on screen at 96 px per inch">
+                1:{scale >= 10 ? Math.round(scale) : scale.toFixed(1)}
+              </span>
+            </>
+          )}
+          <Divider />
+          <div className="flex rounded border border-zinc-200 bg-white p-0.5" role="radiogroup" aria-label="Units">
+            {(['mm', 'in'] as const).map((u) => (
+              <button
+                key={u}
+                type="button"
+                role="radio"
+                aria-checked={units === u}
+                onClick={() => onUnitsChange(u)}
+                className={`h-6 rounded-sm px-2 text-[12.5px] ${units === u ? 'bg-accent-600 text-white' : 'text-zinc-600 hover:bg-zinc-100'}`}
+              >
+                {u}
+              </button>
+            ))}
+          </div>
+        </div>
+      </div>
+      <div className="flex min-h-0 flex-1">
+        <div className="relative min-w-0 flex-1">
+          {tab === 'drawing' ? (
+            <>
+              <StudioCanvas editor={editor} state={state} warnings={warnings} fitRequest={fitRequest} />
+              <p className="pointer-events-none absolute bottom-2 left-3 text-[11.5px] text-zinc-400">
+                {readOnly
+                  ? 'Wheel to zoom · drag the background to pan'
+                  : 'Drag to move · arrows nudge (Shift ×10) · wheel zooms · drag the background or hold Space to pan · Ctrl+Z undo'}
+              </p>
+            </>
+          ) : (
+            <div className="h-full overflow-auto bg-zinc-50/60">
+              <LiningView pieces={lastPlan.current?.liningPieces ?? []} units={units} stale={figures.stale} />
+            </div>
+          )}
+        </div>
+        <aside className="w-[19.5rem] shrink-0 space-y-5 overflow-y-auto border-l border-zinc-200 bg-white px-4 py-3">
+          <Inspector
+            editor={editor}
+            doc={state.doc}
+            selection={sel}
+            units={units}
+            readOnly={readOnly}
+            messages={selHit ? warnings.get(selHit) ?? [] : []}
+          />
+          <div className="border-t border-zinc-200 pt-3">
+            <FiguresPanel
+              state={figures}
+              units={units}
+              readOnly={readOnly}
+              onApplyPortLength={(mm) => editor.applyPortLength(figures.figures?.port?.portIndexes ?? [], mm)}
+              onShowWarning={showWarning}
+            />
+          </div>
+        </aside>
+      </div>
+    </div>
+  );
+}
+
+export default DesignStudio;
