@@ -30,9 +30,9 @@ export function LiningView({ pieces, units, stale }: LiningViewProps) {
   return (
     <div className={`space-y-5 p-5 ${stale ? 'opacity-45 grayscale' : ''}`} data-testid="lining-view">
       <p className="max-w-3xl text-[12.5px] leading-snug text-zinc-600">
-        Cut sizes include the crush allowance. Drawn at 1 : {Math.round(1 / scale)}; print full-size stencils from the cut plan.
-        Polyester batt is kind to skin; if you line with glass or mineral wool, wear gloves, long sleeves and a mask, and
-        follow your local health-and-safety rules.
+        Cut sizes include the crush allowance. Drawn at about 1 : {Math.round(3.7795 / scale)} on screen; print full-size stencils
+        from the cut plan. Glass and mineral wool irritate skin, eyes and airways: if you line with them, wear gloves, long
+        sleeves and a mask, and follow your local health-and-safety rules.
       </p>
       {FACE_ORDER.filter((face) => pieces.some((p) => p.face === face)).map((face) => (
         <section key={face}>
