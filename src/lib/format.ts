@@ -1,11 +1,11 @@
 /** Display formatting. Lengths are millimetres inside; shown with their unit. */
 
-const numberFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 1 });
+const numberFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 1, useGrouping: false });
 
-/** `1234.5` → `1,234.5`; at most one decimal for millimetres. */
+/** `1234.56` → `1234.6`: no thousands separator (as on workshop drawings), one decimal by default. */
 export function formatNumber(value: number, maximumFractionDigits = 1): string {
   if (maximumFractionDigits === 1) return numberFormat.format(value);
-  return new Intl.NumberFormat('en-GB', { maximumFractionDigits }).format(value);
+  return new Intl.NumberFormat('en-GB', { maximumFractionDigits, useGrouping: false }).format(value);
 }
 
 /** Outer size as W × H × D, e.g. `220 × 360 × 260 mm`. */

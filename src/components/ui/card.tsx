@@ -20,7 +20,7 @@ export function Card({
   id?: string;
 }) {
   return (
-    <section id={id} className={cn('rounded-xl border border-zinc-200 bg-white shadow-xs', className)}>
+    <section id={id} className={cn('scroll-mt-20 rounded-xl border border-zinc-200 bg-white shadow-xs', className)}>
       {title || actions ? (
         <header className="flex items-start justify-between gap-4 border-b border-zinc-100 px-5 py-3.5">
           <div className="min-w-0">

@@ -12,6 +12,7 @@ export function Dialog({
   children,
   footer,
   role = 'dialog',
+  wide = false,
 }: {
   open: boolean;
   onClose: () => void;
@@ -19,6 +20,8 @@ export function Dialog({
   children?: ReactNode;
   footer?: ReactNode;
   role?: 'dialog' | 'alertdialog';
+  /** 36rem instead of 30rem, for longer choices. */
+  wide?: boolean;
 }) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
@@ -39,7 +42,7 @@ export function Dialog({
         event.preventDefault();
         onClose();
       }}
-      className="m-auto w-[min(30rem,calc(100vw-2rem))] rounded-xl border border-zinc-200 bg-white p-0 text-zinc-800 shadow-xl"
+      className={`m-auto ${wide ? 'w-[min(36rem,calc(100vw-2rem))]' : 'w-[min(30rem,calc(100vw-2rem))]'} rounded-xl border border-zinc-200 bg-white p-0 text-zinc-800 shadow-xl`}
     >
       {open ? (
         <div className="px-6 pt-5 pb-5">

@@ -6,7 +6,7 @@ const MATERIALS = ['MDF', 'Birch plywood', 'Plywood', 'Particleboard', 'HDF'];
 
 export function BoxSection({ readOnly }: { readOnly: boolean }) {
   return (
-    <Card title="Box" description="Outer size, sheet material and how the panels join. All lengths in millimetres.">
+    <Card id="box" title="Box" description="Outer size, sheet material and how the panels join. All lengths in millimetres.">
       <div className="space-y-5">
         <TextField name="name" label="Name" />
         <div>

@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef, useState } from 'react';
-import { FormProvider, useForm } from 'react-hook-form';
+import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import type { DesignDto } from '../../../../shared/schemas/api.schema';
 import { designSchema, type Design, type DesignInput } from '../../../../shared/schemas/design.schema';
 import { LeaveGuard } from '../../../components/leave-guard';
@@ -15,6 +15,7 @@ import { formatDateTime, formatRelativeTime } from '../../../lib/format';
 import { applyApiError } from '../../../lib/form-errors';
 import { designQueryOptions } from '../api/get-design';
 import { useUpdateDesign } from '../api/update-design';
+import { sameDesign } from '../compare';
 import { keepFaceCoords } from '../defaults';
 import { BoxSection } from './box-section';
 import { BracesSection } from './braces-section';
@@ -25,6 +26,31 @@ import { PlanSummary } from './plan-summary';
 /** What is sent: only the two coordinates each opening's face uses. */
 export function designForSave(design: Design): Design {
   return { ...design, openings: design.openings.map(keepFaceCoords) };
+}
+
+/** Jump links to the form's sections, with what each holds. */
+function SectionLinks({ braces, openings, lined }: { braces: number; openings: number; lined: boolean }) {
+  const links = [
+    { href: '#box', label: 'Box' },
+    { href: '#braces', label: 'Braces', count: braces },
+    { href: '#openings', label: 'Openings', count: openings },
+    { href: '#lining', label: 'Lining', note: lined ? undefined : 'none' },
+  ];
+  return (
+    <nav aria-label="Sections of the form" className="mt-4 border-t border-zinc-100 pt-3">
+      <ul className="flex flex-wrap gap-x-4 gap-y-1 text-[13px]">
+        {links.map((l) => (
+          <li key={l.href}>
+            <a href={l.href} className="text-zinc-600 hover:text-accent-700 hover:underline">
+              {l.label}
+              {l.count !== undefined ? <span className="ml-1 text-zinc-400 tabular-nums">{l.count}</span> : null}
+              {l.note ? <span className="ml-1 text-zinc-400">({l.note})</span> : null}
+            </a>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
 }
 
 interface Conflict {
@@ -53,12 +79,24 @@ export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: num
     mode: 'onSubmit',
     reValidateMode: 'onChange',
   });
-  const { isDirty, isSubmitting } = form.formState;
+  const { isSubmitting } = form.formState;
+  const values = useWatch({ control: form.control });
+  const isDirty = !sameDesign(values, base.design);
   const busy = isSubmitting || update.isPending;
+
+  // The form starts again from a saved or reloaded version once the submit has finished
+  // (react-hook-form's docs advise resetting after submission, not inside it).
+  const [resetTo, setResetTo] = useState<DesignDto | null>(null);
+  useEffect(() => {
+    if (resetTo && !isSubmitting) {
+      form.reset(resetTo.design);
+      setResetTo(null);
+    }
+  }, [form, resetTo, isSubmitting]);
 
   const adopt = (dto: DesignDto) => {
     setBase(dto);
-    form.reset(dto.design);
+    setResetTo(dto);
   };
 
   const save = async (design: Design, version: number) => {
@@ -138,7 +176,7 @@ export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: num
         <aside className="space-y-4 lg:sticky lg:top-20">
           <Card bodyClassName="px-5 py-4">
             <div className="text-sm" data-testid="save-status">
-              {isDirty ? (
+              {!canEdit ? null : isDirty ? (
                 <p className="flex items-center gap-2 text-amber-800">
                   <span className="size-2 rounded-full bg-amber-500" /> Unsaved changes
                 </p>
@@ -148,7 +186,7 @@ export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: num
                   {savedAt ? 'All changes saved' : 'No changes'}
                 </p>
               )}
-              <p className="mt-1 text-[13px] text-zinc-500" title={formatDateTime(base.updatedAt)}>
+              <p className={canEdit ? 'mt-1 text-[13px] text-zinc-500' : 'text-[13px] text-zinc-500'} title={formatDateTime(base.updatedAt)}>
                 Version {base.version} · saved {formatRelativeTime(base.updatedAt)}
                 {base.updatedBy ? ` by ${base.updatedBy}` : ''}
               </p>
@@ -169,6 +207,7 @@ export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: num
                 </Button>
               </div>
             ) : null}
+            <SectionLinks braces={values.braces?.length ?? 0} openings={values.openings?.length ?? 0} lined={values.lining != null} />
           </Card>
           <PlanSummary workshopId={workshopId} designId={base.id} version={base.version} dirty={isDirty} />
         </aside>
@@ -180,6 +219,7 @@ export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: num
         open={conflict !== null}
         onClose={() => setConflict(null)}
         role="alertdialog"
+        wide
         title="Someone else saved this design"
         footer={
           conflict?.latest ? (

@@ -61,7 +61,7 @@ export function DesignsTable({
         header: 'Outer size (W × H × D)',
         cell: (info) => {
           const d = info.row.original;
-          return <span className="tabular-nums">{formatSizeMm(d.widthMm, d.heightMm, d.depthMm)}</span>;
+          return <span className="whitespace-nowrap tabular-nums">{formatSizeMm(d.widthMm, d.heightMm, d.depthMm)}</span>;
         },
       }),
       column.accessor('braceCount', {
@@ -80,9 +80,9 @@ export function DesignsTable({
         cell: (info) => {
           const d = info.row.original;
           return (
-            <span title={formatDateTime(d.updatedAt)}>
-              {formatRelativeTime(d.updatedAt)}
-              {d.updatedBy ? <span className="text-zinc-500"> by {d.updatedBy}</span> : null}
+            <span title={formatDateTime(d.updatedAt)} className="block leading-snug">
+              <span className="block text-zinc-800">{formatRelativeTime(d.updatedAt)}</span>
+              {d.updatedBy ? <span className="block text-[13px] text-zinc-500">by {d.updatedBy}</span> : null}
             </span>
           );
         },
@@ -172,7 +172,7 @@ export function DesignsTable({
                       key={header.id}
                       scope="col"
                       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                      className={cn('px-5 py-2.5 font-normal', numeric && 'text-right')}
+                      className={cn('px-5 py-2.5 font-normal whitespace-nowrap', numeric && 'text-right')}
                     >
                       {header.column.getCanSort() ? (
                         <button
