@@ -1,5 +1,5 @@
 import { DEMO_BOOKSHELF, DEMO_FLOORSTANDER } from '../shared/demo/designs.js';
-import type { Role } from '../shared/schemas/api.schema.js';
+import { ROLES, type Role } from '../shared/schemas/api.schema.js';
 import type { Orm } from './db.js';
 import { hashPassword } from './modules/auth/password.js';
 import { User } from './modules/auth/user.entity.js';
@@ -10,12 +10,13 @@ import { Workshop } from './modules/workshops/workshop.entity.js';
 /** The invented demo of PRODUCT.md §9. Printed by `npm start`; never seeded when NODE_ENV=production. */
 export const DEMO_WORKSHOP = 'Harbour Lane Audio';
 export const DEMO_PASSWORD = 'boxwright-demo';
-export const DEMO_PEOPLE: ReadonlyArray<{ email: string; role: Role }> = [
-  { email: 'owner@harbourlane.test', role: 'owner' },
-  { email: 'designer@harbourlane.test', role: 'designer' },
-  { email: 'maker@harbourlane.test', role: 'maker' },
-  { email: 'viewer@harbourlane.test', role: 'viewer' },
-];
+export const DEMO_EMAILS = {
+  owner: 'owner@harbourlane.test',
+  designer: 'designer@harbourlane.test',
+  maker: 'maker@harbourlane.test',
+  viewer: 'viewer@harbourlane.test',
+} as const satisfies Record<Role, string>;
+export const DEMO_PEOPLE: ReadonlyArray<{ email: string; role: Role }> = ROLES.map((role) => ({ role, email: DEMO_EMAILS[role] }));
 
 /** Whether to seed: only a database that was just created, only when asked, never in production. */
 export function shouldSeed(opts: { wasNew: boolean; requested: boolean; nodeEnv: string | undefined }): boolean {
@@ -37,7 +38,7 @@ export async function seedDemo(orm: Orm): Promise<boolean> {
     await em.flush();
     // Through the service, so the demo designs pass the same checks as a user's save.
     const designs = new DesignsService(em);
-    for (const design of [DEMO_BOOKSHELF, DEMO_FLOORSTANDER]) await designs.create(workshop.id, design, 'designer@harbourlane.test');
+    for (const design of [DEMO_BOOKSHELF, DEMO_FLOORSTANDER]) await designs.create(workshop.id, design, DEMO_EMAILS.designer);
     return true;
   });
 }

@@ -9,7 +9,7 @@ import { createApp } from '../../server/app.js';
 import { initOrm, migrate, type Orm } from '../../server/db.js';
 import type { Logger } from '../../server/middleware/error-handler.js';
 import type { RateLimitOptions } from '../../server/modules/auth/rate-limit.js';
-import { DEMO_PASSWORD, seedDemo } from '../../server/seed.js';
+import { DEMO_EMAILS, DEMO_PASSWORD, seedDemo } from '../../server/seed.js';
 import { createSessionStore } from '../../server/sessions.js';
 
 export type Agent = ReturnType<typeof request.agent>;
@@ -55,12 +55,8 @@ export async function buildTestApp(opts: { seed?: boolean; loginLimit?: RateLimi
   };
 }
 
-export const DEMO = {
-  owner: 'owner@harbourlane.test',
-  designer: 'designer@harbourlane.test',
-  maker: 'maker@harbourlane.test',
-  viewer: 'viewer@harbourlane.test',
-} as const;
+/** The demo people's e-mails by role (server/seed.ts). */
+export const DEMO = DEMO_EMAILS;
 
 /** A signed-in agent (keeps the session cookie between requests). */
 export async function signIn(app: Express, email: string, password: string = DEMO_PASSWORD): Promise<Agent> {
