@@ -3,7 +3,8 @@
  * parts list that maps a layout's `partId` to something a person can read.
  */
 import type { NestJobInput } from '../schemas/nest.schema.js';
-import type { LiningPiecePlan, PanelGrain, PanelPlan } from '../schemas/plan.types.js';
+import type { Design } from '../schemas/design.schema.js';
+import type { LiningPiecePlan, PanelGrain, PanelPlan, Plan } from '../schemas/plan.types.js';
 import { slugify } from './file-names.js';
 
 /** One cabinet design of a build. */
@@ -106,4 +107,9 @@ export function nestPartsFromCutParts(parts: readonly CutPart[]): NestJobInput['
 export function buildLiningMassKg(cabinets: readonly BuildCabinet[]): number | undefined {
   if (!cabinets.some((c) => c.plan.lining)) return undefined;
   return cabinets.reduce((sum, c) => sum + (c.plan.lining?.massKg ?? 0) * c.count, 0);
+}
+
+/** A build's cabinet from a planned design: its name, material, and the plan. */
+export function buildCabinet(design: Design, plan: Plan, count: number, liningMaterial = 'polyester batt'): BuildCabinet {
+  return { name: design.name, count, plan, material: design.material.name, liningMaterial };
 }
