@@ -3,7 +3,7 @@
  * and port tubes. All lengths in mm.
  */
 import type { Axis, BarBrace, Opening, PortOpening, ShelfBrace, BraceWindow } from '../schemas/design.schema.js';
-import { circlePolygon, rectFromCentre, rectPolygon, type Point, type Rect } from '../geometry/polygon.js';
+import { circlePolygon, rectContains, rectFromCentre, rectPolygon, type Point, type Rect } from '../geometry/polygon.js';
 import { AXIS_INDEX, FACE_NORMAL, FACE_VIEW, faceCoordsOf, openingPoint, panelThickness, type Box3, type Frame, type Vec3 } from './frame.js';
 
 /** The two axes a brace spans (or a bar's cross-section uses), in alphabetical order. */
@@ -59,6 +59,21 @@ export function cutoutsOverlap(a: Cutout, b: Cutout): boolean {
   const circle = a.shape === 'round' ? a : (b as Extract<Cutout, { shape: 'round' }>);
   const rect = cutoutBounds(a.shape === 'rect' ? a : b);
   return circleOverlapsRect(circle.cx, circle.cy, circle.diameter / 2, rect);
+}
+
+/** Whether `inner` lies wholly inside `outer` (a rectangle in a circle: its four corners). */
+export function cutoutContains(outer: Cutout, inner: Cutout): boolean {
+  const eps = 1e-6;
+  if (outer.shape === 'rect') return rectContains(cutoutBounds(outer), cutoutBounds(inner));
+  const r = outer.diameter / 2;
+  if (inner.shape === 'round') return Math.hypot(inner.cx - outer.cx, inner.cy - outer.cy) + inner.diameter / 2 <= r + eps;
+  const b = cutoutBounds(inner);
+  return [
+    [b.minX, b.minY],
+    [b.maxX, b.minY],
+    [b.maxX, b.maxY],
+    [b.minX, b.maxY],
+  ].every(([x, y]) => Math.hypot(x! - outer.cx, y! - outer.cy) <= r + eps);
 }
 
 export function circleOverlapsRect(cx: number, cy: number, r: number, rect: Rect): boolean {

@@ -2,7 +2,7 @@
  * Warnings about a design that can be planned but is risky (PRODUCT.md §3). Never silent: each is a plan
  * warning with a code, a plain message and the field it is about.
  */
-import type { Design, Face } from '../schemas/design.schema.js';
+import type { Design, Face, ShelfBrace } from '../schemas/design.schema.js';
 import type { Warning } from '../schemas/plan.types.js';
 import { rectContains } from '../geometry/polygon.js';
 import {
@@ -15,7 +15,21 @@ import {
   type Box3,
   type Frame,
 } from './frame.js';
-import { barBraceBox, cutoutBounds, cutoutOverlapsRect, cutoutsOverlap, openingFootprint, portTube, shelfBraceBox, throughCutout } from './elements.js';
+import {
+  OTHER_AXES,
+  barBraceBox,
+  cutoutBounds,
+  cutoutContains,
+  cutoutOverlapsRect,
+  cutoutsOverlap,
+  openingFootprint,
+  portTube,
+  shelfBraceBox,
+  throughCutout,
+  windowCutout,
+  type Cutout,
+  type PortTube,
+} from './elements.js';
 import { FACE_PANEL_NAMES } from './panels.js';
 
 const mm = (v: number) => `${Math.round(v)} mm`;
@@ -88,7 +102,8 @@ export function geometryWarnings(design: Design, frame: Frame): Warning[] {
     if (o.type !== 'port') return;
     const tube = portTube(frame, o);
     const ai = AXIS_INDEX[tube.axis];
-    design.braces.forEach((_, bi) => {
+    design.braces.forEach((b, bi) => {
+      if (b.type === 'shelf' && b.axis === tube.axis && passesThroughWindow(frame, b, tube)) return;
       if (boxesOverlap(tube.insideBox, braceBox(design, frame, bi))) {
         warnings.push({ code: 'port_crosses_brace', message: `The port tube at openings[${i}] crosses ${braceLabel(design, bi)}`, field: `openings[${i}].length` });
       }
@@ -154,6 +169,19 @@ export function geometryWarnings(design: Design, frame: Frame): Warning[] {
     }
   }
   return warnings;
+}
+
+/** A tube running through a shelf brace across its axis inside one of the brace's windows. */
+function passesThroughWindow(frame: Frame, brace: ShelfBrace, tube: PortTube): boolean {
+  const [ua, va] = OTHER_AXES[brace.axis];
+  const ui = AXIS_INDEX[ua];
+  const vi = AXIS_INDEX[va];
+  const cx = (tube.box.min[ui]! + tube.box.max[ui]!) / 2 - frame.cavity.min[ui]!;
+  const cy = (tube.box.min[vi]! + tube.box.max[vi]!) / 2 - frame.cavity.min[vi]!;
+  const w = tube.box.max[ui]! - tube.box.min[ui]!;
+  const h = tube.box.max[vi]! - tube.box.min[vi]!;
+  const footprint: Cutout = tube.shape === 'round' ? { shape: 'round', cx, cy, diameter: w } : { shape: 'rect', cx, cy, width: w, height: h };
+  return brace.windows.some((win) => cutoutContains(windowCutout(frame, brace, win), footprint));
 }
 
 function touchesAhead(box: Box3, ahead: Box3, ai: number, direction: 1 | -1, innerEnd: number): boolean {

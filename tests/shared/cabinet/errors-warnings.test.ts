@@ -112,6 +112,17 @@ describe('warnings, never silent (PRODUCT §3)', () => {
     expect(codes(plan)).toContain('port_crosses_brace');
   });
 
+  it('a port tube passing through a window of a brace across it does not cross the brace', () => {
+    const design = (window: { u: number; v: number; diameter: number }) =>
+      plainBox({
+        braces: [{ type: 'shelf', axis: 'z', position: 250, thickness: 18, windows: [{ shape: 'round', ...window }] }],
+        openings: [{ type: 'port', face: 'back', x: 150, y: 150, diameter: 50, wall: 3, length: 200 }],
+      });
+    expect(codes(mustPlan(design({ u: 150, v: 150, diameter: 70 })))).not.toContain('port_crosses_brace');
+    // a window too small for the tube's outer diameter (56 mm)
+    expect(codes(mustPlan(design({ u: 150, v: 150, diameter: 50 })))).toContain('port_crosses_brace');
+  });
+
   it('a cut-out crossing a panel edge (into an adjoining panel) or a brace', () => {
     // front runs through (default joinery); the sides sit behind x 0…18: a driver reaching x < 18 crosses that edge
     const edge = mustPlan(plainBox({ openings: [{ type: 'driver', face: 'front', x: 60, y: 200, diameter: 100 }] }));
