@@ -29,6 +29,7 @@ export type PanelHole =
     }
   | {
       shape: 'rect';
+      /** Centre in the panel's own coordinates (like round holes). */
       x: number;
       y: number;
       width: number;
