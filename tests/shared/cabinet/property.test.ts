@@ -1,25 +1,15 @@
 /**
  * Property tests (fast-check): any valid design plans without an exception, its lining pieces lie inside
  * their faces and net ≤ gross; any invalid design is a field error, never an exception.
- * Designs are built from a seed with a small deterministic generator (mulberry32), so a failing seed can be
- * replayed.
+ * Designs are built from a seed with the project's deterministic generator (mulberry32 in shared/nesting/rng.ts),
+ * so a failing seed can be replayed.
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import polygonClipping from 'polygon-clipping';
 import type { DesignInput, Face, FacePair, Axis } from '../../../shared/schemas/design.schema.js';
 import { planDesign } from '../../../shared/cabinet/index.js';
-
-function mulberry32(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { mulberry32 } from '../../../shared/nesting/rng.js';
 
 const FACES: Face[] = ['front', 'back', 'left', 'right', 'top', 'bottom'];
 const AXES: Axis[] = ['x', 'y', 'z'];
