@@ -175,8 +175,9 @@ async function main(): Promise<number> {
         return page;
       };
 
-      await mainContext.clearCookies();
+      // Tabs first (a late answer to an old tab could set a cookie again), then the cookies.
       for (const page of mainContext.pages()) await page.close();
+      await mainContext.clearCookies();
 
       const ctx: E2EContext = {
         baseUrl,

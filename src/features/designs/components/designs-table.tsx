@@ -80,7 +80,7 @@ export function DesignsTable({
         cell: (info) => {
           const d = info.row.original;
           return (
-            <span title={formatDateTime(d.updatedAt)} className="block leading-snug">
+            <span title={formatDateTime(d.updatedAt)} className="block leading-snug whitespace-nowrap">
               <span className="block text-zinc-800">{formatRelativeTime(d.updatedAt)}</span>
               {d.updatedBy ? <span className="block text-[13px] text-zinc-500">by {d.updatedBy}</span> : null}
             </span>
