@@ -35,6 +35,49 @@ function show(value: unknown, path: string, units: UnitSystem): string {
   return typeof o === 'object' && o.type ? `a ${o.type}` : JSON.stringify(value);
 }
 
+export interface ConflictChangesProps {
+  theirs: StudioDoc;
+  mine: StudioDoc;
+  units: UnitSystem;
+}
+
+/** The table of fields that differ between the saved version (theirs) and mine. */
+export function ConflictChanges({ theirs, mine, units }: ConflictChangesProps) {
+  const changes = diffDesigns(theirs, mine);
+  return (
+    <div className="max-h-72 overflow-auto rounded border border-zinc-200">
+      <table className="w-full text-[12.5px]">
+        <thead className="sticky top-0 bg-zinc-50 text-left text-[11px] uppercase tracking-wider text-zinc-500">
+          <tr>
+            <th className="px-2.5 py-1.5 font-bold">Field</th>
+            <th className="px-2.5 py-1.5 font-bold">Theirs</th>
+            <th className="px-2.5 py-1.5 font-bold">Mine</th>
+          </tr>
+        </thead>
+        <tbody data-testid="conflict-changes">
+          {changes.length === 0 ? (
+            <tr>
+              <td colSpan={3} className="px-2.5 py-2 text-zinc-500">
+                No differences in the design itself.
+              </td>
+            </tr>
+          ) : (
+            changes.map((c) => (
+              <tr key={c.path} className="border-t border-zinc-100">
+                <td className="px-2.5 py-1.5" title={c.path}>
+                  {c.label}
+                </td>
+                <td className="px-2.5 py-1.5 font-mono tabular-nums">{show(c.theirs, c.path, units)}</td>
+                <td className="px-2.5 py-1.5 font-mono tabular-nums">{show(c.mine, c.path, units)}</td>
+              </tr>
+            ))
+          )}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
 export function ConflictDialog({ open, theirs, mine, units, theirsBy, theirsAt, busy, onReloadTheirs, onKeepMine, onClose }: ConflictDialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
@@ -43,7 +86,6 @@ export function ConflictDialog({ open, theirs, mine, units, theirsBy, theirsAt, 
     if (open && !d.open) d.showModal();
     if (!open && d.open) d.close();
   }, [open]);
-  const changes = theirs ? diffDesigns(theirs, mine) : [];
   return (
     <dialog
       ref={ref}
@@ -63,38 +105,7 @@ export function ConflictDialog({ open, theirs, mine, units, theirsBy, theirsAt, 
           {theirsBy ? `${theirsBy} saved` : 'Someone saved'} a newer version{theirsAt ? ` (${new Date(theirsAt).toLocaleString('en-GB')})` : ''} while you
           were editing. Your changes are not saved yet.
         </p>
-        {theirs && (
-          <div className="max-h-72 overflow-auto rounded border border-zinc-200">
-            <table className="w-full text-[12.5px]">
-              <thead className="sticky top-0 bg-zinc-50 text-left text-[11px] uppercase tracking-wider text-zinc-500">
-                <tr>
-                  <th className="px-2.5 py-1.5 font-bold">Field</th>
-                  <th className="px-2.5 py-1.5 font-bold">Theirs</th>
-                  <th className="px-2.5 py-1.5 font-bold">Mine</th>
-                </tr>
-              </thead>
-              <tbody data-testid="conflict-changes">
-                {changes.length === 0 ? (
-                  <tr>
-                    <td colSpan={3} className="px-2.5 py-2 text-zinc-500">
-                      No differences in the design itself.
-                    </td>
-                  </tr>
-                ) : (
-                  changes.map((c) => (
-                    <tr key={c.path} className="border-t border-zinc-100">
-                      <td className="px-2.5 py-1.5" title={c.path}>
-                        {c.label}
-                      </td>
-                      <td className="px-2.5 py-1.5 font-mono tabular-nums">{show(c.theirs, c.path, units)}</td>
-                      <td className="px-2.5 py-1.5 font-mono tabular-nums">{show(c.mine, c.path, units)}</td>
-                    </tr>
-                  ))
-                )}
-              </tbody>
-            </table>
-          </div>
-        )}
+        {theirs && <ConflictChanges theirs={theirs} mine={mine} units={units} />}
         <div className="flex flex-wrap justify-end gap-2 pt-1">
           <button type="button" className="rounded border border-zinc-300 bg-white px-3 py-1.5 text-[13px] hover:bg-zinc-50" onClick={onClose} disabled={busy}>
             Decide later

@@ -7,6 +7,7 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import type { Warning } from '../../../../shared/schemas/plan.types';
 import { BRACE_KINDS, OPENING_KINDS } from '../model/commands';
 import { StudioEditor } from '../model/editor';
+import { diffDesigns } from '../model/diff';
 import { EMPTY_FIGURES, nextFigures, type FiguresState, type PlanOutcome } from '../model/figures';
 import { planDesign } from '../model/plan';
 import { GRIDS, type GridId } from '../model/snapping';
@@ -72,8 +73,11 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
   const [fitRequest, setFitRequest] = useState(0);
 
   // The page's design is the source when it changes from outside (the side form, a reload).
+  // A design equal to ours in every field (the form hands back a re-parsed copy of what we emitted) is ignored.
   useEffect(() => {
-    if (design !== emitted.current && design !== editor.doc) editor.replaceDoc(design);
+    if (design === emitted.current || design === editor.doc) return;
+    if (diffDesigns(editor.doc, design).length === 0) return;
+    editor.replaceDoc(design);
   }, [design, editor]);
   useEffect(() => editor.setReadOnly(readOnly), [readOnly, editor]);
   useEffect(() => {
@@ -129,7 +133,7 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
 
   return (
     <div
-      className={`flex flex-col overflow-hidden rounded-lg border border-zinc-200 bg-white ${className ?? 'h-[calc(100vh-9rem)] min-h-[560px]'}`}
+      className={`flex flex-col overflow-hidden rounded-lg border border-zinc-200 bg-white ${className ?? 'h-[clamp(500px,calc(100vh-10rem),760px)]'}`}
       data-testid="design-studio"
       data-readonly={readOnly || undefined}
     >
@@ -178,7 +182,7 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
         <div className="ml-auto flex items-center gap-1.5">
           {readOnly && (
             <span className="rounded bg-zinc-100 px-2 py-0.5 text-[11.5px] text-zinc-600" data-testid="studio-readonly">
-              Read only
+              View only
             </span>
           )}
           {tab === 'drawing' && (

@@ -18,7 +18,24 @@ export interface FiguresPanelProps {
 const n1 = (v: number) => v.toLocaleString('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
 const n2 = (v: number) => v.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
 
-function Row({ label, value, unit, note, testId, tone }: { label: string; value: string; unit?: string; note?: string; testId?: string; tone?: 'warn' }) {
+function Row({
+  label,
+  value,
+  unit,
+  note,
+  testId,
+  tone,
+  raw,
+}: {
+  label: string;
+  value: string;
+  unit?: string;
+  note?: string;
+  testId?: string;
+  tone?: 'warn';
+  /** The unrounded number, for tests and tooltips. */
+  raw?: number;
+}) {
   return (
     <div className="flex items-baseline justify-between gap-3 py-[3px] text-[13px]">
       <dt className="text-zinc-600">
@@ -26,7 +43,9 @@ function Row({ label, value, unit, note, testId, tone }: { label: string; value:
         {note && <span className="ml-1 text-[11px] text-zinc-400">{note}</span>}
       </dt>
       <dd className={`font-mono tabular-nums ${tone === 'warn' ? 'text-orange-800' : 'text-zinc-900'}`}>
-        <span data-testid={testId}>{value}</span>
+        <span data-testid={testId} data-value={raw} title={raw !== undefined ? String(raw) : undefined}>
+          {value}
+        </span>
         {unit && <span className="ml-1 text-[11px] text-zinc-500">{unit}</span>}
       </dd>
     </div>
@@ -65,8 +84,8 @@ export function FiguresPanel({ state, units, readOnly, onApplyPortLength, onShow
       {f && (
         <div className={`space-y-3 transition-opacity ${state.stale ? 'opacity-45 grayscale' : ''}`} data-stale={state.stale || undefined}>
           <Group title="Volume">
-            <Row label="Gross internal" value={n2(f.grossLitres)} unit="L" testId="fig-gross" />
-            <Row label="Net" value={n2(f.netLitres)} unit="L" testId="fig-net" />
+            <Row label="Gross internal" value={n2(f.grossLitres)} raw={f.grossLitres} unit="L" testId="fig-gross" />
+            <Row label="Net" value={n2(f.netLitres)} raw={f.netLitres} unit="L" testId="fig-net" />
             {f.apparentLitresEstimate !== null && (
               <Row label="Apparent with lining" note="estimate" value={`≈ ${n1(f.apparentLitresEstimate)}`} unit="L" testId="fig-apparent" />
             )}
@@ -74,7 +93,7 @@ export function FiguresPanel({ state, units, readOnly, onApplyPortLength, onShow
           <Group title="Port">
             {f.port ? (
               <>
-                <Row label="Tuning" value={n1(f.port.tuningHz)} unit="Hz" testId="fig-tuning" />
+                <Row label="Tuning" value={n1(f.port.tuningHz)} raw={f.port.tuningHz} unit="Hz" testId="fig-tuning" />
                 {f.port.targetHz !== null && <Row label="Target" value={n1(f.port.targetHz)} unit="Hz" />}
                 {f.port.lengthForTargetMm !== null && (
                   <div className="flex items-baseline justify-between gap-3 py-[3px] text-[13px]">
@@ -117,7 +136,7 @@ export function FiguresPanel({ state, units, readOnly, onApplyPortLength, onShow
           <Group title="Lining">
             {f.lining ? (
               <>
-                <Row label="Area" value={n2(f.lining.areaM2)} unit="m²" testId="fig-lining-area" />
+                <Row label="Area" value={n2(f.lining.areaM2)} raw={f.lining.areaM2} unit="m²" testId="fig-lining-area" />
                 <Row label="Mass" value={n2(f.lining.massKg)} unit="kg" />
                 <Row label="Pieces" value={String(f.lining.pieceCount)} />
               </>

@@ -44,7 +44,7 @@ export function LiningView({ pieces, units, stale }: LiningViewProps) {
                 const w = p.width * scale;
                 const h = p.height * scale;
                 return (
-                  <figure key={`${p.name}-${i}`} className="rounded border border-zinc-200 bg-white p-2" data-testid="lining-piece">
+                  <figure key={`${p.name}-${i}`} className="rounded border border-zinc-200 bg-white p-2" data-testid="lining-piece" data-name={p.name} data-width={p.width} data-height={p.height}>
                     <svg width={w + pad + 4} height={h + pad + 4} role="img" aria-label={`${p.name}, ${formatLength(p.width, units)} by ${formatLength(p.height, units)}`}>
                       <g transform={`translate(${pad},2)`}>
                         <path
