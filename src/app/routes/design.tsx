@@ -1,7 +1,11 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { lazy, Suspense } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { can } from '../../../shared/schemas/api.schema';
+import { can, type UnitSystem } from '../../../shared/schemas/api.schema';
+import { ErrorBoundary } from '../../components/errors/error-boundary';
+import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
+import { ConflictChanges, saveUnits } from '../../features/studio/conflict';
 import { PageHeader } from '../../components/layouts/app-layout';
 import { paths } from '../../config/paths';
 import { designQueryOptions } from '../../features/designs/api/get-design';
@@ -9,6 +13,9 @@ import { DesignEditor } from '../../features/designs/components/design-editor';
 import { formatSizeMm } from '../../lib/format';
 import { parseId } from './params';
 import { useWorkshop } from './workshop';
+
+/** The canvas studio: its own chunk, since konva is large (STACK.md trap 9). */
+const DesignStudio = lazy(() => import('../../features/studio'));
 
 /** The design must load before the form can start from it; a 404/403 goes to the route's error view. */
 export const clientLoader =
@@ -23,6 +30,16 @@ export function DesignRoute() {
   const designId = parseId(useParams().designId);
   const { data } = useSuspenseQuery(designQueryOptions(workshopId, designId));
   const { outer } = data.design;
+  const queryClient = useQueryClient();
+  const units: UnitSystem = useMe().data?.user.units ?? 'mm';
+  // Kept per user: shown at once, then saved on the account (PATCH /api/auth/me).
+  const setUnits = (next: UnitSystem) => {
+    const key = meQueryOptions().queryKey;
+    queryClient.setQueryData(key, (me) => (me ? { ...me, user: { ...me.user, units: next } } : me));
+    saveUnits(next)
+      .then((me) => queryClient.setQueryData(key, me))
+      .catch(() => void queryClient.invalidateQueries({ queryKey: key }));
+  };
   return (
     <>
       <PageHeader
@@ -34,7 +51,20 @@ export function DesignRoute() {
         title={<span data-testid="design-title">{data.name}</span>}
         description={`Outer size ${formatSizeMm(outer.width, outer.height, outer.depth)}`}
       />
-      <DesignEditor key={designId} workshopId={workshopId} initial={data} canEdit={can(membership.role, 'editDesigns')} />
+      <DesignEditor
+        key={designId}
+        workshopId={workshopId}
+        initial={data}
+        canEdit={can(membership.role, 'editDesigns')}
+        studio={(slot) => (
+          <ErrorBoundary fallback={<p className="rounded border border-zinc-200 bg-white p-4 text-sm">The drawing could not be shown; the form below still works.</p>}>
+            <Suspense fallback={<div className="flex h-[560px] items-center justify-center rounded-lg border border-zinc-200 bg-white text-sm text-zinc-500">Loading the studio…</div>}>
+              <DesignStudio {...slot} units={units} onUnitsChange={setUnits} />
+            </Suspense>
+          </ErrorBoundary>
+        )}
+        conflictDetails={(theirs, mine) => <ConflictChanges theirs={theirs} mine={mine} units={units} />}
+      />
     </>
   );
 }

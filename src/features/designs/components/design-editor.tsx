@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQueryClient } from '@tanstack/react-query';
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import type { DesignDto } from '../../../../shared/schemas/api.schema';
 import { designSchema, type Design, type DesignInput } from '../../../../shared/schemas/design.schema';
@@ -61,11 +61,32 @@ interface Conflict {
 
 const FORM_ID = 'design-form';
 
+/** What the page hands the design studio (the canvas): the form's design, parsed, and a way to change it. */
+export interface StudioSlot {
+  design: Design;
+  readOnly: boolean;
+  onChange(design: Design): void;
+}
+
 /**
  * The design page's form (the canvas comes later): every field of the design JSON, saved with the
  * version it was loaded from. Viewers and makers get the same page read-only, without a save control.
  */
-export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: number; initial: DesignDto; canEdit: boolean }) {
+export function DesignEditor({
+  workshopId,
+  initial,
+  canEdit,
+  studio,
+  conflictDetails,
+}: {
+  workshopId: number;
+  initial: DesignDto;
+  canEdit: boolean;
+  /** The canvas studio, composed in by the route (it lives in its own feature and chunk). */
+  studio?: (slot: StudioSlot) => ReactNode;
+  /** What changed between their saved version and mine, shown in the conflict dialog. */
+  conflictDetails?: (theirs: Design, mine: Design) => ReactNode;
+}) {
   const queryClient = useQueryClient();
   const [base, setBase] = useState<DesignDto>(initial);
   const [serverMessages, setServerMessages] = useState<FieldMessage[]>([]);
@@ -121,6 +142,15 @@ export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: num
 
   const onSubmit = form.handleSubmit((design) => save(design, base.version));
 
+  // The studio and this form edit one design: the studio gets the form's values (last valid parse) and
+  // its edits reset the form's values (the saved base stays the reference for "unsaved changes").
+  const lastValid = useRef<Design>(initial.design);
+  const studioDesign = useMemo(() => {
+    const parsed = designSchema.safeParse(values);
+    if (parsed.success) lastValid.current = parsed.data;
+    return lastValid.current;
+  }, [values]);
+
   // Ctrl+S / Cmd+S saves, as in any editor.
   const submitRef = useRef(onSubmit);
   submitRef.current = onSubmit;
@@ -140,6 +170,11 @@ export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: num
 
   return (
     <FormProvider {...form}>
+      {studio ? (
+        <div className="mb-6">
+          {studio({ design: studioDesign, readOnly: !canEdit, onChange: (design) => form.reset(design, { keepDefaultValues: true }) })}
+        </div>
+      ) : null}
       <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <form id={FORM_ID} onSubmit={onSubmit} noValidate className="min-w-0 space-y-5" aria-label="Design">
           {!canEdit ? (
@@ -249,6 +284,7 @@ export function DesignEditor({ workshopId, initial, canEdit }: { workshopId: num
               <strong className="text-zinc-900">Reload their version</strong> drops your changes.{' '}
               <strong className="text-zinc-900">Keep mine</strong> saves your version over theirs.
             </p>
+            {conflictDetails ? conflictDetails(conflict.latest.design, conflict.mine) : null}
           </div>
         ) : (
           <p>The newer version could not be loaded just now. Your changes are still here; try saving again in a moment.</p>
