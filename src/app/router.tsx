@@ -5,10 +5,7 @@ import { RouteError } from '../components/errors/route-error';
 import { paths } from '../config/paths';
 import { authKeys } from '../features/auth/api/keys';
 import { api } from '../lib/api-client';
-import * as designRoute from './routes/design';
-import * as designsRoute from './routes/designs';
 import * as homeRoute from './routes/home';
-import * as membersRoute from './routes/members';
 import { NotFoundRoute } from './routes/not-found';
 import * as signedInRoute from './routes/signed-in';
 import * as signInRoute from './routes/sign-in';
@@ -40,14 +37,31 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               errorElement: <RouteError />,
               children: [
                 { index: true, loader: workshopRoute.indexLoader },
-                { path: 'designs', loader: designsRoute.clientLoader(queryClient), element: <designsRoute.DesignsRoute />, errorElement: <RouteError /> },
+                // The workshop pages load on first visit, so sign-in stays light.
+                {
+                  path: 'designs',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/designs');
+                    return { loader: m.clientLoader(queryClient), Component: m.DesignsRoute };
+                  },
+                },
                 {
                   path: 'designs/:designId',
-                  loader: designRoute.clientLoader(queryClient),
-                  element: <designRoute.DesignRoute />,
                   errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/design');
+                    return { loader: m.clientLoader(queryClient), Component: m.DesignRoute };
+                  },
                 },
-                { path: 'members', loader: membersRoute.clientLoader(queryClient), element: <membersRoute.MembersRoute />, errorElement: <RouteError /> },
+                {
+                  path: 'members',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/members');
+                    return { loader: m.clientLoader(queryClient), Component: m.MembersRoute };
+                  },
+                },
               ],
             },
           ],
