@@ -4,7 +4,8 @@
  */
 import type { LiningPiecePlan, PanelHole, PanelPlan, Point } from '../../../shared/schemas/plan.types.js';
 import type { Layout } from '../../../shared/schemas/nest.schema.js';
-import type { BuildCabinet } from '../../../shared/render/build.js';
+import type { BuildCabinet, CutPart } from '../../../shared/render/build.js';
+import type { StockInfo } from '../../../shared/render/cut-list.js';
 
 export function circle(cx: number, cy: number, d: number, n = 64): Point[] {
   return Array.from({ length: n }, (_, i): Point => [cx + (d / 2) * Math.cos((2 * Math.PI * i) / n), cy + (d / 2) * Math.sin((2 * Math.PI * i) / n)]);
@@ -137,3 +138,18 @@ export const SMALL_LAYOUT: Layout = {
   unplaced: [],
   stats: { sheetsUsed: 1, utilisation: 0.2, elapsedMs: 3 },
 };
+
+/** The parts list of SMALL_LAYOUT. */
+export const SMALL_PARTS: CutPart[] = [
+  { id: 'front', kind: 'panel', name: 'Front (baffle)', cabinet: 'Harbour bookshelf', widthMm: 220, heightMm: 360, thicknessMm: 18, quantity: 2, grain: 'height', material: 'MDF' },
+  { id: 'back', kind: 'panel', name: 'Back', cabinet: 'Harbour bookshelf', widthMm: 220, heightMm: 360, thicknessMm: 18, quantity: 1, grain: 'height', material: 'MDF' },
+  { id: 'side', kind: 'panel', name: 'Left side', cabinet: 'Harbour bookshelf', widthMm: 224, heightMm: 360, thicknessMm: 18, quantity: 2, grain: 'none', material: 'MDF' },
+  { id: 'backLining', kind: 'lining', name: 'Back lining 1', cabinet: 'Harbour bookshelf', widthMm: 189, heightMm: 193, thicknessMm: 50, quantity: 1, grain: 'none', material: 'polyester batt' },
+  { id: 'top', kind: 'lining', name: 'Top lining', cabinet: 'Harbour bookshelf', widthMm: 89, heightMm: 179, thicknessMm: 50, quantity: 1, grain: 'none', material: 'polyester batt' },
+];
+
+/** Stock of SMALL_LAYOUT: an MDF sheet at 38.50 each and a batt roll at 6.20 per metre. */
+export const SMALL_STOCK: StockInfo[] = [
+  { id: 'mdf18', kind: 'sheet', cost: 38.5, trim: 10, material: 'MDF', thickness: 18, grain: 'none' },
+  { id: 'batt1200', kind: 'roll', cost: 6.2, material: 'polyester batt', thickness: 50 },
+];
