@@ -2,6 +2,8 @@ import { User } from './modules/auth/user.entity.js';
 import { Design } from './modules/designs/design.entity.js';
 import { Membership } from './modules/workshops/membership.entity.js';
 import { Workshop } from './modules/workshops/workshop.entity.js';
+import { AuditEvent } from './modules/audit/audit.entity.js';
+import { StockItem } from './modules/stock/stock-item.entity.js';
 
 /** Every entity, listed once for the ORM config (explicit, so tsx, vitest and the CLI see the same set). */
-export const ENTITIES = [User, Workshop, Membership, Design];
+export const ENTITIES = [User, Workshop, Membership, Design, StockItem, AuditEvent];

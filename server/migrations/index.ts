@@ -1,8 +1,12 @@
 import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201215411 } from './Migration20261201215411.js';
+import { Migration20261201221145 } from './Migration20261201221145.js';
 
 /**
  * Every migration, oldest first. `npm run orm -- migration:create` writes a new file here; add it to this list
  * (listed explicitly so migrations load the same way under tsx, vitest and the CLI).
  */
-export const MIGRATIONS: MigrationObject[] = [{ name: 'Migration20261201215411', class: Migration20261201215411 }];
+export const MIGRATIONS: MigrationObject[] = [
+  { name: 'Migration20261201215411', class: Migration20261201215411 },
+  { name: 'Migration20261201221145', class: Migration20261201221145 },
+];

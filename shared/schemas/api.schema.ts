@@ -89,6 +89,8 @@ export const PERMISSIONS = {
   exportPlans: ['owner', 'designer', 'maker'],
   tickParts: ['owner', 'maker'],
   manageStock: ['owner', 'maker'],
+  /** Designers choose stock for cut plans; viewers see plans, not the stock room. */
+  readStock: ['owner', 'designer', 'maker'],
   manageMembers: ['owner'],
   manageWorkshop: ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
@@ -96,4 +98,93 @@ export type Permission = keyof typeof PERMISSIONS;
 
 export function can(role: Role | undefined | null, permission: Permission): boolean {
   return role != null && (PERMISSIONS[permission] as readonly Role[]).includes(role);
+}
+
+// ─── Stock room (PRODUCT.md §4, §6) ─────────────────────────────────────────────────────────────
+export const STOCK_KINDS = ['sheet', 'remnant', 'roll'] as const;
+export type StockKind = (typeof STOCK_KINDS)[number];
+/** 'length': the grain runs along the sheet's height (its long side as listed); 'none': parts may turn. */
+export const GRAIN_KINDS = ['none', 'length'] as const;
+export type GrainKind = (typeof GRAIN_KINDS)[number];
+
+const mm = (what: string, max: number) =>
+  z
+    .number({ error: `${what} must be a number (mm)` })
+    .refine((v) => Number.isFinite(v) && v > 0, `${what} must be greater than 0`)
+    .refine((v) => v <= max, `${what} must be at most ${max} mm`);
+
+/** A stock item as typed in a form or a CSV row. Sheets and remnants need a height; rolls a width and optional length. */
+export const stockInput = z
+  .object({
+    kind: z.enum(STOCK_KINDS, { error: 'kind must be sheet, remnant or roll' }),
+    material: z.string({ error: 'material is required' }).trim().min(1, 'material is required').max(80, 'material must be at most 80 characters'),
+    thicknessMm: mm('thickness', 200),
+    widthMm: mm('width', 10_000),
+    heightMm: mm('height', 10_000).nullable().default(null),
+    /** Roll only: the length on the roll; null = as much as needed. */
+    lengthMm: mm('length', 1_000_000).nullable().default(null),
+    /** null = unlimited. */
+    quantity: z.number({ error: 'quantity must be a whole number' }).int('quantity must be a whole number').min(0, 'quantity must be 0 or more').max(100_000).nullable().default(null),
+    /** Per sheet or remnant; per metre for a roll. */
+    cost: z.number({ error: 'cost must be a number' }).min(0, 'cost must be 0 or more').max(1_000_000).nullable().default(null),
+    grain: z.enum(GRAIN_KINDS, { error: 'grain must be none or length' }).default('none'),
+    note: z.string().trim().max(200, 'note must be at most 200 characters').default(''),
+  })
+  .superRefine((s, ctx) => {
+    if (s.kind !== 'roll' && s.heightMm === null) ctx.addIssue({ code: 'custom', path: ['heightMm'], message: `a ${s.kind} needs a height` });
+    if (s.kind === 'roll' && s.heightMm !== null) ctx.addIssue({ code: 'custom', path: ['heightMm'], message: 'a roll has a length, not a height' });
+    if (s.kind !== 'roll' && s.lengthMm !== null) ctx.addIssue({ code: 'custom', path: ['lengthMm'], message: `a ${s.kind} has a height, not a length` });
+  });
+export type StockInput = z.input<typeof stockInput>;
+export type StockValues = z.output<typeof stockInput>;
+
+export const stockUpdateInput = z.object({
+  version: z.number({ error: 'version is required' }).int().min(1),
+  item: stockInput,
+});
+
+export interface StockItemDto {
+  id: number;
+  kind: StockKind;
+  material: string;
+  thicknessMm: number;
+  widthMm: number;
+  /** Sheet or remnant. */
+  heightMm: number | null;
+  /** Roll: available length; null = as much as needed. */
+  lengthMm: number | null;
+  /** null = unlimited. */
+  quantity: number | null;
+  /** Per sheet or remnant; per metre for a roll. */
+  cost: number | null;
+  grain: GrainKind;
+  note: string;
+  /** For a remnant: the cut plan it was kept from. */
+  fromPlanId: number | null;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+  updatedBy: string | null;
+}
+
+/** One bad cell of an imported CSV: `row` is the line as a spreadsheet numbers it (the header is row 1). */
+export interface CsvRowProblem {
+  row: number;
+  column: string;
+  reason: string;
+}
+export interface StockImportReport {
+  imported: number;
+  problems: CsvRowProblem[];
+}
+
+// ─── Audit ──────────────────────────────────────────────────────────────────────────────────────
+export interface AuditEventDto {
+  id: number;
+  subjectType: string;
+  subjectId: number;
+  action: string;
+  summary: string;
+  actorEmail: string;
+  at: string;
 }
