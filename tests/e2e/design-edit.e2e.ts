@@ -30,6 +30,7 @@ const tests: E2ETest[] = [
       await ctx.screenshot('designs-list-designer');
       await openDesign(ctx, page, BOOKSHELF);
       await page.getByTestId('plan-volumes').waitFor();
+      await page.waitForLoadState('networkidle');
       await ctx.screenshot('design-page-designer');
 
       const width = page.getByLabel('Width (W)');
@@ -69,6 +70,7 @@ const tests: E2ETest[] = [
       expect((await page.getByRole('button', { name: 'Save design' }).count()) === 0, 'a viewer must not see a save button');
       expect(await page.getByLabel('Width (W)').isDisabled(), 'a viewer must not be able to type in the width');
       expect((await page.getByRole('button', { name: /^Add / }).count()) === 0, 'a viewer must not see add buttons');
+      await page.waitForLoadState('networkidle');
       await ctx.screenshot('design-page-viewer');
     },
   },

@@ -7,7 +7,6 @@ import { designSchema, type Design, type DesignInput } from '../../../../shared/
 import { LeaveGuard } from '../../../components/leave-guard';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { Card } from '../../../components/ui/card';
 import { Dialog } from '../../../components/ui/dialog';
 import { isApiError } from '../../../lib/api-client';
 import { describeFormPath, type FieldMessage } from '../../../lib/field-paths';
@@ -37,8 +36,9 @@ function SectionLinks({ braces, openings, lined }: { braces: number; openings: n
     { href: '#lining', label: 'Lining', note: lined ? undefined : 'none' },
   ];
   return (
-    <nav aria-label="Sections of the form" className="mt-4 border-t border-zinc-100 pt-3">
-      <ul className="flex flex-wrap gap-x-4 gap-y-1 text-[13px]">
+    <nav aria-label="Sections of the form" className="rounded-xl border border-zinc-200 bg-white px-5 py-3 shadow-xs">
+      <p className="mb-1 text-[13px] text-zinc-500">Go to</p>
+      <ul className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
         {links.map((l) => (
           <li key={l.href}>
             <a href={l.href} className="text-zinc-600 hover:text-accent-700 hover:underline">
@@ -168,38 +168,77 @@ export function DesignEditor({
 
   const rootError = form.formState.errors.root?.server?.message;
 
+  const discard = () => {
+    form.reset(base.design);
+    setServerMessages([]);
+  };
+
   return (
     <FormProvider {...form}>
+      {/* One save bar for the whole page, kept in view below the app header while the page scrolls. */}
+      <div className="sticky top-[calc(3.5rem+1px)] z-20 -mx-6 mb-5 border-b border-zinc-200 bg-zinc-50/95 px-6 py-2.5 backdrop-blur">
+        <div className="flex min-h-9 items-center justify-between gap-4" data-testid="save-status">
+          <div className="flex min-w-0 items-center gap-3 text-sm">
+            {!canEdit ? (
+              <p className="flex items-center gap-2 text-zinc-700">
+                <span className="size-2 rounded-full bg-zinc-400" />
+                <strong>Read only</strong>
+                <span className="text-zinc-500">Your role lets you read this design but not change it.</span>
+              </p>
+            ) : isDirty ? (
+              <p className="flex items-center gap-2 text-amber-800">
+                <span className="size-2 rounded-full bg-amber-500" /> Unsaved changes
+              </p>
+            ) : (
+              <p className="flex items-center gap-2 text-zinc-700">
+                <span className="size-2 rounded-full bg-accent-500" />
+                {savedAt ? 'All changes saved' : 'No changes'}
+              </p>
+            )}
+            <span className="truncate text-[13px] text-zinc-500" title={formatDateTime(base.updatedAt)}>
+              · Version {base.version}, saved {formatRelativeTime(base.updatedAt)}
+              {base.updatedBy ? ` by ${base.updatedBy}` : ''}
+            </span>
+          </div>
+          {canEdit ? (
+            <div className="flex shrink-0 gap-2">
+              <Button disabled={!isDirty || busy} onClick={discard}>
+                Discard changes
+              </Button>
+              <Button type="submit" form={FORM_ID} variant="primary" busy={busy} disabled={!isDirty && !busy} title="Save (Ctrl+S)">
+                Save design
+              </Button>
+            </div>
+          ) : null}
+        </div>
+      </div>
+
+      {serverMessages.length > 0 || rootError ? (
+        <Alert tone="error" title="Not saved" className="mb-5">
+          {serverMessages.length > 0 ? (
+            <>
+              <p>Please correct the fields marked below:</p>
+              <ul className="mt-1 list-disc space-y-0.5 pl-5">
+                {serverMessages.map((m) => (
+                  <li key={m.formPath}>
+                    {describeFormPath(m.formPath)}: {m.message}
+                  </li>
+                ))}
+              </ul>
+            </>
+          ) : (
+            rootError
+          )}
+        </Alert>
+      ) : null}
+
       {studio ? (
         <div className="mb-6">
           {studio({ design: studioDesign, readOnly: !canEdit, onChange: (design) => form.reset(design, { keepDefaultValues: true }) })}
         </div>
       ) : null}
       <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
-        <form id={FORM_ID} onSubmit={onSubmit} noValidate className="min-w-0 space-y-5" aria-label="Design">
-          {!canEdit ? (
-            <Alert tone="info" title="Read only">
-              Your role in this workshop lets you read this design but not change it.
-            </Alert>
-          ) : null}
-          {serverMessages.length > 0 || rootError ? (
-            <Alert tone="error" title="Not saved">
-              {serverMessages.length > 0 ? (
-                <>
-                  <p>Please correct the fields marked below:</p>
-                  <ul className="mt-1 list-disc space-y-0.5 pl-5">
-                    {serverMessages.map((m) => (
-                      <li key={m.formPath}>
-                        {describeFormPath(m.formPath)}: {m.message}
-                      </li>
-                    ))}
-                  </ul>
-                </>
-              ) : (
-                rootError
-              )}
-            </Alert>
-          ) : null}
+        <form id={FORM_ID} onSubmit={onSubmit} noValidate className="min-w-0" aria-label="Design">
           <fieldset disabled={!canEdit} className="min-w-0 space-y-5">
             <BoxSection readOnly={!canEdit} />
             <BracesSection readOnly={!canEdit} />
@@ -208,43 +247,9 @@ export function DesignEditor({
           </fieldset>
         </form>
 
-        <aside className="space-y-4 lg:sticky lg:top-20">
-          <Card bodyClassName="px-5 py-4">
-            <div className="text-sm" data-testid="save-status">
-              {!canEdit ? null : isDirty ? (
-                <p className="flex items-center gap-2 text-amber-800">
-                  <span className="size-2 rounded-full bg-amber-500" /> Unsaved changes
-                </p>
-              ) : (
-                <p className="flex items-center gap-2 text-zinc-600">
-                  <span className="size-2 rounded-full bg-accent-500" />
-                  {savedAt ? 'All changes saved' : 'No changes'}
-                </p>
-              )}
-              <p className={canEdit ? 'mt-1 text-[13px] text-zinc-500' : 'text-[13px] text-zinc-500'} title={formatDateTime(base.updatedAt)}>
-                Version {base.version} · saved {formatRelativeTime(base.updatedAt)}
-                {base.updatedBy ? ` by ${base.updatedBy}` : ''}
-              </p>
-            </div>
-            {canEdit ? (
-              <div className="mt-4 flex gap-2">
-                <Button type="submit" form={FORM_ID} variant="primary" className="flex-1" busy={busy} disabled={!isDirty && !busy}>
-                  Save design
-                </Button>
-                <Button
-                  disabled={!isDirty || busy}
-                  onClick={() => {
-                    form.reset(base.design);
-                    setServerMessages([]);
-                  }}
-                >
-                  Discard
-                </Button>
-              </div>
-            ) : null}
-            <SectionLinks braces={values.braces?.length ?? 0} openings={values.openings?.length ?? 0} lined={values.lining != null} />
-          </Card>
+        <aside className="space-y-4 lg:sticky lg:top-32">
           <PlanSummary workshopId={workshopId} designId={base.id} version={base.version} dirty={isDirty} />
+          <SectionLinks braces={values.braces?.length ?? 0} openings={values.openings?.length ?? 0} lined={values.lining != null} />
         </aside>
       </div>
 
