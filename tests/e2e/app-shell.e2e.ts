@@ -27,6 +27,22 @@ const tests: E2ETest[] = [
     },
   },
   {
+    name: 'when the session ends, the next request leads to sign-in and back',
+    async run(ctx) {
+      const page = await ctx.page();
+      await ctx.signIn(page, DEMO.maker);
+      await page.getByTestId('designs-table').waitFor();
+      // The session ends on the server side (as when it expires): the browser loses its cookie.
+      await page.context().clearCookies();
+      await page.getByRole('link', { name: 'Members' }).click();
+      await page.waitForURL(/\/sign-in\?redirectTo=%2Fw%2F\d+%2Fmembers$/);
+      await page.getByLabel('E-mail').fill(DEMO.maker);
+      await page.getByLabel('Password').fill('boxwright-demo');
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.waitForURL(/\/w\/\d+\/members$/);
+    },
+  },
+  {
     name: 'sign-up creates a workshop with the new user as owner; sign-out ends the session',
     async run(ctx) {
       const page = await ctx.page();

@@ -145,6 +145,26 @@ const tests: E2ETest[] = [
       expect(saved.version === current.version + 2, `two saves after version ${current.version}, server has ${saved.version}`);
     },
   },
+  {
+    name: 'leaving with unsaved changes asks first',
+    async run(ctx) {
+      const page = await ctx.page();
+      await ctx.signIn(page, DEMO.designer);
+      await openDesign(ctx, page, BOOKSHELF);
+      await page.getByLabel('Depth (D)').fill('270');
+      await page.getByRole('link', { name: '← All designs' }).click();
+      const dialog = page.getByRole('alertdialog');
+      await dialog.getByText('Leave without saving?').waitFor();
+      await ctx.screenshot('design-page-leave-guard');
+      await dialog.getByRole('button', { name: 'Stay on this page' }).click();
+      expect(/\/designs\/\d+$/.test(new URL(page.url()).pathname), 'staying keeps the design page open');
+      expect((await page.getByLabel('Depth (D)').inputValue()) === '270', 'staying keeps the unsaved value');
+
+      await page.getByRole('link', { name: '← All designs' }).click();
+      await dialog.getByRole('button', { name: 'Leave and discard' }).click();
+      await page.getByTestId('designs-table').waitFor();
+    },
+  },
 ];
 
 export default tests;
