@@ -33,10 +33,16 @@ async function findBookshelf(api: APIRequestContext): Promise<Located> {
   return { workshopId, designId: item.id, url, version: dto.version, design: designSchema.parse(dto.design) };
 }
 
-async function openStudio(page: Page, ctx: E2EContext, at: Located): Promise<void> {
+/** Signs in as `email` in a new tab and opens the demo bookshelf in the studio. */
+async function openStudioAs(ctx: E2EContext, email: string): Promise<{ page: Page; api: APIRequestContext; at: Located }> {
+  const api = await ctx.api(email);
+  const at = await findBookshelf(api);
+  const page = await ctx.page();
+  await ctx.signIn(page, email);
   await page.goto(`${ctx.baseUrl}/w/${at.workshopId}/designs/${at.designId}`);
   await page.locator('[data-testid=studio-canvas] canvas').first().waitFor({ timeout: 20_000 });
   await page.getByTestId('fig-net').waitFor();
+  return { page, api, at };
 }
 
 /** Page coordinates of a box point in one of the studio's drawings, from the canvas's camera. */
@@ -106,11 +112,7 @@ const tests: E2ETest[] = [
     name: 'a designer drags the shelf brace up 50 mm: lining and net volume follow the engine; undo restores them',
     timeoutMs: 90_000,
     async run(ctx) {
-      const designer = await ctx.api(DEMO.designer);
-      const at = await findBookshelf(designer);
-      const page = await ctx.page();
-      await ctx.signIn(page, DEMO.designer);
-      await openStudio(page, ctx, at);
+      const { page, api: designer, at } = await openStudioAs(ctx, DEMO.designer);
       await ctx.screenshot('studio-designer-1280');
 
       const before = plannedOrThrow(at.design);
@@ -164,11 +166,7 @@ const tests: E2ETest[] = [
   {
     name: 'a viewer sees the studio read-only and cannot drag a brace',
     async run(ctx) {
-      const viewer = await ctx.api(DEMO.viewer);
-      const at = await findBookshelf(viewer);
-      const page = await ctx.page();
-      await ctx.signIn(page, DEMO.viewer);
-      await openStudio(page, ctx, at);
+      const { page, at } = await openStudioAs(ctx, DEMO.viewer);
       await page.getByTestId('studio-readonly').waitFor();
       const studio = page.getByTestId('design-studio');
       expect((await studio.getByRole('button', { name: 'Shelf brace', exact: true }).count()) === 0, 'a viewer must not see the palette');
@@ -192,11 +190,7 @@ const tests: E2ETest[] = [
     name: 'a save conflict lists what changed, and "keep mine" resolves it',
     timeoutMs: 90_000,
     async run(ctx) {
-      const designer = await ctx.api(DEMO.designer);
-      const at = await findBookshelf(designer);
-      const page = await ctx.page();
-      await ctx.signIn(page, DEMO.designer);
-      await openStudio(page, ctx, at);
+      const { page, at } = await openStudioAs(ctx, DEMO.designer);
 
       // The owner saves a deeper cabinet meanwhile.
       const owner = await ctx.api(DEMO.owner);

@@ -1,5 +1,5 @@
-/** The "edited elsewhere" dialog and its field diff, without konva. */
-export { ConflictChanges, ConflictDialog } from './components/conflict-dialog';
-export type { ConflictChangesProps, ConflictDialogProps } from './components/conflict-dialog';
+/** What the design page needs around saving, without konva: the conflict's changed fields, and units. */
+export { ConflictChanges } from './components/conflict-changes';
+export type { ConflictChangesProps } from './components/conflict-changes';
 export { diffDesigns, type FieldChange } from './model/diff';
 export { saveUnits } from './api/save-units';

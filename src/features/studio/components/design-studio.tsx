@@ -48,6 +48,41 @@ function ToolButton(props: React.ButtonHTMLAttributes<HTMLButtonElement> & { pre
   );
 }
 
+interface SegmentedProps<T extends string> {
+  role: 'tablist' | 'radiogroup';
+  label?: string;
+  options: { value: T; label: string }[];
+  value: T;
+  onChange(value: T): void;
+  tone: 'dark' | 'accent';
+  className?: string;
+}
+
+/** A small segmented switch: the Drawing/Lining tabs and the mm/in choice. */
+function Segmented<T extends string>({ role, label, options, value, onChange, tone, className }: SegmentedProps<T>) {
+  const on = tone === 'dark' ? 'bg-zinc-800 text-white' : 'bg-accent-600 text-white';
+  return (
+    <div className={`flex rounded border border-zinc-200 bg-white p-0.5 ${className ?? ''}`} role={role} aria-label={label}>
+      {options.map((o) => {
+        const active = o.value === value;
+        return (
+          <button
+            key={o.value}
+            type="button"
+            role={role === 'tablist' ? 'tab' : 'radio'}
+            aria-selected={role === 'tablist' ? active : undefined}
+            aria-checked={role === 'radiogroup' ? active : undefined}
+            onClick={() => onChange(o.value)}
+            className={`h-6 rounded-sm px-2.5 text-[12.5px] ${active ? on : 'text-zinc-600 hover:bg-zinc-100'}`}
+          >
+            {o.label}
+          </button>
+        );
+      })}
+    </div>
+  );
+}
+
 function Divider() {
   return <span aria-hidden className="mx-1 h-5 w-px bg-zinc-200" />;
 }
@@ -138,20 +173,17 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
       data-readonly={readOnly || undefined}
     >
       <div className="flex min-h-11 flex-wrap items-center gap-0.5 border-b border-zinc-200 bg-zinc-50/80 px-2 py-1" role="toolbar" aria-label="Studio">
-        <div className="mr-1 flex rounded border border-zinc-200 bg-white p-0.5" role="tablist">
-          {(['drawing', 'lining'] as const).map((t) => (
-            <button
-              key={t}
-              role="tab"
-              type="button"
-              aria-selected={tab === t}
-              onClick={() => setTab(t)}
-              className={`h-6 rounded-sm px-2.5 text-[12.5px] ${tab === t ? 'bg-zinc-800 text-white' : 'text-zinc-600 hover:bg-zinc-100'}`}
-            >
-              {t === 'drawing' ? 'Drawing' : 'Lining'}
-            </button>
-          ))}
-        </div>
+        <Segmented<Tab>
+          className="mr-1"
+          role="tablist"
+          options={[
+            { value: 'drawing', label: 'Drawing' },
+            { value: 'lining', label: 'Lining' },
+          ]}
+          value={tab}
+          onChange={setTab}
+          tone="dark"
+        />
         {!readOnly && tab === 'drawing' && (
           <>
             <Divider />
@@ -211,20 +243,17 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
             </>
           )}
           <Divider />
-          <div className="flex rounded border border-zinc-200 bg-white p-0.5" role="radiogroup" aria-label="Units">
-            {(['mm', 'in'] as const).map((u) => (
-              <button
-                key={u}
-                type="button"
-                role="radio"
-                aria-checked={units === u}
-                onClick={() => onUnitsChange(u)}
-                className={`h-6 rounded-sm px-2 text-[12.5px] ${units === u ? 'bg-accent-600 text-white' : 'text-zinc-600 hover:bg-zinc-100'}`}
-              >
-                {u}
-              </button>
-            ))}
-          </div>
+          <Segmented<UnitSystem>
+            role="radiogroup"
+            label="Units"
+            options={[
+              { value: 'mm', label: 'mm' },
+              { value: 'in', label: 'in' },
+            ]}
+            value={units}
+            onChange={onUnitsChange}
+            tone="accent"
+          />
         </div>
       </div>
       <div className="flex min-h-0 flex-1">

@@ -242,17 +242,16 @@ export class StudioEditor {
   }
 
   undo(): boolean {
-    if (this.state.readOnly || this.state.tool.name === 'dragging') return false;
-    const r = H.undo(this.state.history, this.state.doc);
-    if (!r) return false;
-    this.set({ doc: r.doc, selection: r.selection, history: r.history, docVersion: this.state.docVersion + 1 });
-    this.onCommit?.(r.doc);
-    return true;
+    return this.restore(H.undo);
   }
 
   redo(): boolean {
+    return this.restore(H.redo);
+  }
+
+  private restore(step: typeof H.undo): boolean {
     if (this.state.readOnly || this.state.tool.name === 'dragging') return false;
-    const r = H.redo(this.state.history, this.state.doc);
+    const r = step(this.state.history, this.state.doc);
     if (!r) return false;
     this.set({ doc: r.doc, selection: r.selection, history: r.history, docVersion: this.state.docVersion + 1 });
     this.onCommit?.(r.doc);

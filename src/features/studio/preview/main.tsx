@@ -7,7 +7,7 @@ import { createRoot } from 'react-dom/client';
 import '../../../index.css';
 import { designSchema } from '../../../../shared/schemas/design.schema';
 import { DEMO_BOOKSHELF, DEMO_FLOORSTANDER } from '../../../../shared/demo/designs';
-import { ConflictDialog } from '../conflict';
+import { ConflictChanges } from '../conflict';
 import type { StudioDoc, UnitSystem } from '../model/types';
 
 const DesignStudio = lazy(() => import('../index'));
@@ -36,19 +36,14 @@ function Preview() {
           onUnitsChange={setUnits}
         />
       </Suspense>
-      <ConflictDialog
-        open={conflict}
-        theirs={theirs}
-        mine={design}
-        units={units}
-        theirsBy="designer@harbourlane.test"
-        onReloadTheirs={() => {
-          setDesign(theirs);
-          setConflict(false);
-        }}
-        onKeepMine={() => setConflict(false)}
-        onClose={() => setConflict(false)}
-      />
+      {conflict && (
+        <div className="mt-4 max-w-xl rounded border border-zinc-200 bg-white p-4" data-testid="conflict-preview">
+          <ConflictChanges theirs={theirs} mine={design} units={units} />
+          <button className="mt-2 rounded border border-zinc-300 px-2 py-1 text-[12px]" onClick={() => setConflict(false)}>
+            Close
+          </button>
+        </div>
+      )}
     </div>
   );
 }
