@@ -3,6 +3,7 @@
  * are embedded (subset) in the PDF. Pages are created with no margin, so nothing pdfkit does on its own
  * (line wrapping, automatic page breaks) moves what shared/render draws.
  */
+import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import PDFDocument from 'pdfkit';
 import type { FontName, PdfSink } from '../../shared/render/pdf-sink.js';
@@ -11,6 +12,13 @@ const FONT_FILES: Record<FontName, string> = {
   regular: fileURLToPath(new URL('../../fonts/DejaVuSans.ttf', import.meta.url)),
   bold: fileURLToPath(new URL('../../fonts/DejaVuSans-Bold.ttf', import.meta.url)),
 };
+
+/** Font files are read once per process and shared by every document. */
+let fontBytes: Record<FontName, Buffer> | null = null;
+function fonts(): Record<FontName, Buffer> {
+  fontBytes ??= { regular: readFileSync(FONT_FILES.regular), bold: readFileSync(FONT_FILES.bold) };
+  return fontBytes;
+}
 
 export interface PdfkitSinkOptions {
   title?: string;
@@ -37,7 +45,7 @@ export class PdfkitSink implements PdfSink {
       },
       lang: 'en',
     });
-    for (const [name, file] of Object.entries(FONT_FILES)) this.doc.registerFont(name, file);
+    for (const [name, bytes] of Object.entries(fonts())) this.doc.registerFont(name, bytes);
     this.doc.on('data', (c: Buffer) => this.chunks.push(c));
     this.ended = new Promise((resolve, reject) => {
       this.doc.on('end', () => resolve(Buffer.concat(this.chunks)));
