@@ -4,6 +4,7 @@
  * Debian's chromium through playwright-core).
  */
 import type { APIRequestContext, Page } from 'playwright-core';
+import { DEMO_EMAILS, DEMO_PASSWORD } from '../../server/seed';
 
 export interface E2ESession {
   /** A new tab in this session (its own cookies, separate from the main one). */
@@ -35,14 +36,9 @@ export interface E2ETest {
   timeoutMs?: number;
 }
 
-/** The password of every demo account (PRODUCT.md §9; printed by `npm start`). */
-export const DEMO_PASSWORD = 'boxwright-demo';
-export const DEMO = {
-  owner: 'owner@harbourlane.test',
-  designer: 'designer@harbourlane.test',
-  maker: 'maker@harbourlane.test',
-  viewer: 'viewer@harbourlane.test',
-} as const;
+/** The demo sign-ins the server seeds (PRODUCT.md §9; printed by `npm start`). */
+export { DEMO_PASSWORD };
+export const DEMO = DEMO_EMAILS;
 
 /** Throws with `message` when `condition` is false: tests assert with plain checks and clear words. */
 export function expect(condition: unknown, message: string): asserts condition {

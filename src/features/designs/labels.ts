@@ -1,14 +1,9 @@
 /** Words the design form shows for faces, axes and items: plain trade terms (PRODUCT.md §10). */
-import type { Axis, Face, FacePair } from '../../../shared/schemas/design.schema';
+import { FACE_PANEL_NAMES } from '../../../shared/cabinet/panels';
+import type { Axis, FacePair } from '../../../shared/schemas/design.schema';
 
-export const FACE_LABELS: Record<Face, string> = {
-  front: 'Front (baffle)',
-  back: 'Back',
-  left: 'Left side',
-  right: 'Right side',
-  top: 'Top',
-  bottom: 'Bottom',
-};
+/** The same names the plan gives the panels ("Front (baffle)", "Left side", …). */
+export const FACE_LABELS = FACE_PANEL_NAMES;
 
 /** A box coordinate, saying where it is measured from (origin: outer front-bottom-left corner). */
 export const COORD_LABELS: Record<Axis, string> = {
