@@ -13,6 +13,21 @@ import { designRoutes } from './modules/designs/designs.routes.js';
 import { DesignsService } from './modules/designs/designs.service.js';
 import { memberRoutes } from './modules/workshops/workshops.routes.js';
 import { WorkshopsService } from './modules/workshops/workshops.service.js';
+import { createNullMailer, type Mailer } from './mail/mailer.js';
+import type { PublicUrl } from './mail/links.js';
+import { auditRoutes } from './modules/audit/audit.routes.js';
+import { AuditService } from './modules/audit/audit.service.js';
+import { invitationAdminRoutes, invitationLinkRoutes } from './modules/invitations/invitations.routes.js';
+import { InvitationsService } from './modules/invitations/invitations.service.js';
+import { mailRoutes } from './modules/mail/mail.routes.js';
+import { MailService } from './modules/mail/mail.service.js';
+import { passwordResetRoutes, type ResetLimit } from './modules/password-reset/password-reset.routes.js';
+import { PasswordResetService } from './modules/password-reset/password-reset.service.js';
+import { stockRoutes } from './modules/stock/stock.routes.js';
+import { StockService } from './modules/stock/stock.service.js';
+import { uploadRoutes } from './modules/uploads/uploads.routes.js';
+import { UploadsService } from './modules/uploads/uploads.service.js';
+import { MemoryStorage, type FileStorage } from './storage/storage.js';
 import './session-user.js';
 
 export const SESSION_COOKIE = 'boxwright.sid';
@@ -32,6 +47,13 @@ export interface AppDeps {
   /** The built client (dist/client); null serves the API only. */
   clientDir?: string | null;
   logger?: Logger;
+  /** Sends e-mail (server/start.ts: SMTP_URL or the local catcher); default: delivers nothing. */
+  mailer?: Mailer;
+  /** Where people open links sent by e-mail (PUBLIC_URL); never taken from the request. */
+  publicUrl?: PublicUrl;
+  /** Uploaded files; default in memory (server/start.ts passes local disk). */
+  storage?: FileStorage;
+  resetLimit?: ResetLimit;
 }
 
 /** Builds the Express app: JSON API under /api, then the built client with its SPA fallback. */
@@ -46,6 +68,13 @@ export function createApp(deps: AppDeps): Express {
   const auth = new AuthService(orm.em);
   const workshops = new WorkshopsService(orm.em);
   const designs = new DesignsService(orm.em);
+  const mail = new MailService(orm.em, deps.mailer ?? createNullMailer(), logger);
+  const publicUrl = deps.publicUrl ?? (() => 'http://localhost:3000');
+  const stock = new StockService(orm.em);
+  const audit = new AuditService(orm.em);
+  const uploads = new UploadsService(orm.em, deps.storage ?? new MemoryStorage(), stock);
+  const invitations = new InvitationsService(orm.em, mail, publicUrl);
+  const resets = new PasswordResetService(orm.em, mail, publicUrl, logger);
   const passport = createPassport(auth);
   const roleLookup = workshops.roleOf.bind(workshops);
 
@@ -75,6 +104,13 @@ export function createApp(deps: AppDeps): Express {
   );
   api.use('/workshops/:wid/members', memberRoutes(workshops));
   api.use('/workshops/:wid/designs', designRoutes(designs, roleLookup));
+  api.use('/workshops/:wid/stock', stockRoutes(stock, uploads, roleLookup));
+  api.use('/workshops/:wid/history', auditRoutes(audit, roleLookup));
+  api.use('/workshops/:wid/mail', mailRoutes(mail, roleLookup));
+  api.use('/workshops/:wid/invitations', invitationAdminRoutes(invitations, roleLookup));
+  api.use('/workshops/:wid/uploads', uploadRoutes(uploads, roleLookup));
+  api.use('/invitations', invitationLinkRoutes(invitations, (id) => auth.sessionUser(id)));
+  api.use('/password-reset', passwordResetRoutes(resets, deps.resetLimit));
   api.use(apiNotFound);
   api.use(errorHandler(logger));
   app.use('/api', api);

@@ -4,6 +4,10 @@ import { Membership } from './modules/workshops/membership.entity.js';
 import { Workshop } from './modules/workshops/workshop.entity.js';
 import { AuditEvent } from './modules/audit/audit.entity.js';
 import { StockItem } from './modules/stock/stock-item.entity.js';
+import { MailMessage } from './modules/mail/mail-message.entity.js';
+import { Invitation } from './modules/invitations/invitation.entity.js';
+import { PasswordResetToken } from './modules/password-reset/password-reset-token.entity.js';
+import { Upload } from './modules/uploads/upload.entity.js';
 
 /** Every entity, listed once for the ORM config (explicit, so tsx, vitest and the CLI see the same set). */
-export const ENTITIES = [User, Workshop, Membership, Design, StockItem, AuditEvent];
+export const ENTITIES = [User, Workshop, Membership, Design, StockItem, AuditEvent, MailMessage, Invitation, PasswordResetToken, Upload];

@@ -91,6 +91,8 @@ export const PERMISSIONS = {
   manageStock: ['owner', 'maker'],
   /** Designers choose stock for cut plans; viewers see plans, not the stock room. */
   readStock: ['owner', 'designer', 'maker'],
+  /** Build photos and drivers' parameter files (a stock CSV also needs manageStock). */
+  uploadFiles: ['owner', 'designer', 'maker'],
   manageMembers: ['owner'],
   manageWorkshop: ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
@@ -187,4 +189,73 @@ export interface AuditEventDto {
   summary: string;
   actorEmail: string;
   at: string;
+}
+
+// ─── E-mail, invitations, password reset ────────────────────────────────────────────────────────
+export interface MailMessageDto {
+  id: number;
+  kind: string;
+  to: string;
+  subject: string;
+  text: string;
+  via: 'catcher' | 'smtp' | 'none';
+  status: 'sending' | 'sent' | 'failed';
+  error: string | null;
+  sentAt: string;
+  caughtAt: string | null;
+}
+
+export const invitationInput = z.object({ email: emailSchema, role: roleSchema });
+export type InvitationInput = z.input<typeof invitationInput>;
+export interface InvitationDto {
+  id: number;
+  email: string;
+  role: Role;
+  status: 'pending' | 'accepted' | 'expired' | 'revoked';
+  expiresAt: string;
+  invitedBy: string;
+  createdAt: string;
+  /** Whether the e-mail left (false: the invitation is saved, the mail failed; see Sent mail). */
+  mailSent?: boolean;
+}
+/** What the invitation link's page shows before accepting. */
+export interface InvitationPreviewDto {
+  workshopName: string;
+  email: string;
+  role: Role;
+  /** An account with this e-mail exists: sign in as it and accept; else set a password. */
+  accountExists: boolean;
+  expiresAt: string;
+}
+/** New account: a password. Existing account: an empty body, signed in as the invited e-mail. */
+export const invitationAcceptInput = z.object({ password: passwordSchema.optional() });
+
+export const passwordResetRequestInput = z.object({ email: emailSchema });
+export const passwordResetInput = z.object({ password: passwordSchema });
+
+// ─── Uploads ────────────────────────────────────────────────────────────────────────────────────
+export const UPLOAD_KINDS = ['photo', 'drivers-csv', 'stock-csv'] as const;
+export type UploadKind = (typeof UPLOAD_KINDS)[number];
+export interface UploadDto {
+  id: number;
+  kind: UploadKind;
+  subjectType: string | null;
+  subjectId: number | null;
+  name: string;
+  contentType: string;
+  sizeBytes: number;
+  uploadedBy: string;
+  createdAt: string;
+  /** Download/view URL under /api. */
+  url: string;
+}
+/** One row of a drivers' parameters CSV (our own columns). */
+export interface DriverParamsDto {
+  name: string;
+  cutoutDiameterMm: number;
+  displacementLitres: number;
+  /** Sd, cm². */
+  coneAreaCm2: number;
+  /** Xmax, one way, mm. */
+  excursionMm: number;
 }

@@ -10,6 +10,7 @@ import {
 } from '../../../shared/schemas/api.schema.js';
 import { AppError } from '../../errors.js';
 import { recordAudit } from '../audit/audit.service.js';
+import { problemsMessage, problemsToFields } from '../uploads/csv-table.js';
 import { parseStockCsv, stockCsvText } from './stock-csv.js';
 import { StockItem } from './stock-item.entity.js';
 
@@ -136,19 +137,7 @@ export class StockService {
    */
   async importCsv(workshopId: number, csvText: string, byEmail: string): Promise<StockImportReport> {
     const parsed = parseStockCsv(csvText);
-    if (parsed.problems.length) {
-      const fields: Record<string, string> = {};
-      for (const p of parsed.problems) {
-        const key = `row ${p.row}, ${p.column}`;
-        if (!(key in fields)) fields[key] = p.reason;
-      }
-      const first = parsed.problems[0]!;
-      const n = new Set(parsed.problems.map((p) => p.row)).size;
-      throw AppError.invalid(
-        `Nothing was imported: ${n === 1 ? '1 row has' : `${n} rows have`} a problem. Row ${first.row}, ${first.column}: ${first.reason}.`,
-        fields,
-      );
-    }
+    if (parsed.problems.length) throw AppError.invalid(problemsMessage(parsed.problems), problemsToFields(parsed.problems));
     await this.em.transactional(async (em) => {
       const items = parsed.rows.map((values) => em.create(StockItem, { workshop: workshopId, ...values, updatedBy: byEmail }));
       await em.flush();
