@@ -33,6 +33,8 @@ const tests: E2ETest[] = [
       await page.waitForLoadState('networkidle');
       await ctx.screenshot('design-page-designer');
 
+      const title = await page.title();
+      expect(title === `${BOOKSHELF} · Boxwright`, `the tab should name the design, it says "${title}"`);
       const width = page.getByLabel('Width (W)');
       const before = Number(await width.inputValue());
       expect(before === 220, `the demo bookshelf starts 220 mm wide, the form shows ${before}`);

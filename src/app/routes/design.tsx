@@ -42,6 +42,7 @@ export function DesignRoute() {
   };
   return (
     <>
+      <title>{`${data.name} · Boxwright`}</title>
       <PageHeader
         back={
           <Link to={paths.designs.getHref(workshopId)} className="text-zinc-500 hover:text-zinc-900">

@@ -30,6 +30,7 @@ export function DesignsRoute() {
 
   return (
     <>
+      <title>{`Designs · ${membership.workshopName} · Boxwright`}</title>
       <PageHeader
         title="Designs"
         description="Every cabinet design of this workshop."

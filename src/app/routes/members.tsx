@@ -19,6 +19,7 @@ export function MembersRoute() {
   const canManage = can(membership.role, 'manageMembers');
   return (
     <>
+      <title>{`Members · ${membership.workshopName} · Boxwright`}</title>
       <PageHeader
         title="Members"
         description={
