@@ -3,6 +3,7 @@
  */
 import { z } from 'zod';
 import { designSchema } from './design.schema.js';
+import type { Layout } from './nest.schema.js';
 
 export const ROLES = ['owner', 'designer', 'maker', 'viewer'] as const;
 export type Role = (typeof ROLES)[number];
@@ -87,6 +88,8 @@ export const PERMISSIONS = {
   editDesigns: ['owner', 'designer'],
   runCutPlans: ['owner', 'designer', 'maker'],
   exportPlans: ['owner', 'designer', 'maker'],
+  /** Cut plans and their exports: every member, viewers included (PRODUCT.md §2 "plans and exports it is shown"). */
+  readPlans: ['owner', 'designer', 'maker', 'viewer'],
   tickParts: ['owner', 'maker'],
   manageStock: ['owner', 'maker'],
   /** Designers choose stock for cut plans; viewers see plans, not the stock room. */
@@ -190,6 +193,217 @@ export interface AuditEventDto {
   actorEmail: string;
   at: string;
 }
+
+// ─── Builds, nest jobs, cut plans and exports (PRODUCT.md §4–§6) ────────────────────────────────
+export const buildItemInput = z
+  .object({
+    designId: z.number({ error: 'choose a design' }).int('choose a design').positive('choose a design'),
+    /** Cabinets built from this design; a pair is 2. */
+    quantity: z
+      .number({ error: 'quantity must be a whole number' })
+      .int('quantity must be a whole number')
+      .min(1, 'quantity must be at least 1')
+      .max(200, 'quantity must be at most 200'),
+    /** Half of the cabinets are built as the mirror image of the design (left and right of a pair). */
+    mirroredPair: z.boolean({ error: 'mirrored pair must be true or false' }).default(false),
+  })
+  .superRefine((item, ctx) => {
+    if (item.mirroredPair && item.quantity % 2 !== 0) {
+      ctx.addIssue({ code: 'custom', path: ['quantity'], message: 'a mirrored pair needs an even quantity (a pair is 2)' });
+    }
+  });
+
+export const buildInput = z
+  .object({
+    name: z.string({ error: 'name is required' }).trim().min(1, 'name is required').max(120, 'name is at most 120 characters'),
+    notes: z.string().trim().max(1000, 'notes are at most 1000 characters').default(''),
+    items: z.array(buildItemInput, { error: 'items must be a list' }).min(1, 'add at least one design').max(50, 'at most 50 designs in one build'),
+  })
+  .superRefine((b, ctx) => {
+    const seen = new Set<number>();
+    b.items.forEach((item, i) => {
+      if (seen.has(item.designId)) ctx.addIssue({ code: 'custom', path: ['items', i, 'designId'], message: 'this design is already in the build' });
+      seen.add(item.designId);
+    });
+  });
+export type BuildInput = z.input<typeof buildInput>;
+export type BuildValues = z.output<typeof buildInput>;
+
+export const buildUpdateInput = z.object({
+  version: z.number({ error: 'version is required' }).int().min(1),
+  build: buildInput,
+});
+
+export interface BuildItemDto {
+  designId: number;
+  /** null when the design was deleted since. */
+  designName: string | null;
+  quantity: number;
+  mirroredPair: boolean;
+}
+export interface BuildDto {
+  id: number;
+  name: string;
+  notes: string;
+  items: BuildItemDto[];
+  /** Cabinets in the build (sum of the quantities). */
+  cabinetCount: number;
+  cutPlanCount: number;
+  latestCutPlanId: number | null;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+  updatedBy: string | null;
+}
+
+export const CUT_MODES = ['guillotine', 'free'] as const;
+export type CutMode = (typeof CUT_MODES)[number];
+
+/** Kerf default 3.2 mm: a common panel-saw / table-saw blade (common practice). */
+export const DEFAULT_KERF_MM = 3.2;
+
+/** Settings of a cut plan; the stock comes from the stock room (`stockIds`, or all of it) or is typed in. */
+export const cutPlanSettingsInput = z.object({
+  kerfMm: z.number({ error: 'kerf must be a number (mm)' }).min(0, 'kerf must be 0 or more').max(20, 'kerf must be at most 20 mm').default(DEFAULT_KERF_MM),
+  /** Edge trim on every side of sheets and remnants (rolls are not trimmed). */
+  trimMm: z.number({ error: 'trim must be a number (mm)' }).min(0, 'trim must be 0 or more').max(100, 'trim must be at most 100 mm').default(10),
+  mode: z.enum(CUT_MODES, { error: 'mode must be guillotine or free' }).default('guillotine'),
+  /** Offcuts at least this size on both sides are listed to keep. */
+  minOffcutMm: z.number({ error: 'minimum offcut must be a number (mm)' }).min(0, 'minimum offcut must be 0 or more').max(5000, 'minimum offcut must be at most 5000 mm').default(200),
+  objective: z.enum(['sheets', 'cost'], { error: 'objective must be sheets or cost' }).default('sheets'),
+  /** Search time for the whole plan, shared between its materials. */
+  timeLimitMs: z.number({ error: 'time limit must be a number (ms)' }).int().min(200, 'time limit must be at least 200 ms').max(60_000, 'time limit must be at most 60 s').default(3000),
+  seed: z.number({ error: 'seed must be a whole number' }).int('seed must be a whole number').default(1),
+  /** Stock room items to use; omitted: every item in the room. */
+  stockIds: z.array(z.number().int().positive()).max(500).optional(),
+  /** Stock typed in for this plan only (used instead of the stock room). */
+  typedStock: z.array(stockInput).min(1, 'type in at least one stock size').max(20, 'at most 20 typed stock sizes').optional(),
+});
+export type CutPlanSettingsInput = z.input<typeof cutPlanSettingsInput>;
+export type CutPlanSettings = z.output<typeof cutPlanSettingsInput>;
+
+/** `POST /nest-jobs`: a build to plan (→ a saved cut plan), or a raw nest job (PRODUCT.md §8; result only). */
+export const nestJobCreateInput = z
+  .object({
+    buildId: z.number({ error: 'buildId must be a build id' }).int().positive().optional(),
+    settings: cutPlanSettingsInput.prefault({}),
+    job: z.unknown().optional(),
+  })
+  .superRefine((b, ctx) => {
+    if ((b.buildId === undefined) === (b.job === undefined)) {
+      ctx.addIssue({ code: 'custom', path: ['buildId'], message: 'give either a buildId or a nest job' });
+    }
+  });
+export type NestJobCreateInput = z.input<typeof nestJobCreateInput>;
+
+export const NEST_JOB_STATUSES = ['queued', 'running', 'done', 'failed', 'cancelled'] as const;
+export type NestJobStatus = (typeof NEST_JOB_STATUSES)[number];
+
+export interface NestJobDto {
+  id: string;
+  status: NestJobStatus;
+  /** 0..1 */
+  progress: number;
+  /** Sheets in the best layout found so far. */
+  bestSheets: number;
+  message: string;
+  buildId: number | null;
+  createdAt: string;
+  finishedAt: string | null;
+  error: { code: string; message: string } | null;
+  /** When done: the saved cut plan (build jobs) and the layouts (one per material group). */
+  result: { cutPlanId: number | null; layouts: Layout[] } | null;
+}
+
+/** A stock item as the cut plan used it (a snapshot: the stock room may change later). */
+export interface CutPlanStockDto {
+  /** The nest job's stock id; a stock room item's id as text, or `typed-N`. */
+  id: string;
+  /** The stock room item, or null for typed-in stock. */
+  stockItemId: number | null;
+  kind: StockKind;
+  material: string;
+  thicknessMm: number;
+  widthMm: number;
+  heightMm: number | null;
+  lengthMm: number | null;
+  quantity: number | null;
+  cost: number | null;
+  grain: GrainKind;
+  trimMm: number;
+}
+
+/** One part of the cut plan: a panel or lining piece of one cabinet design, for the whole build. */
+export interface CutPlanPartDto {
+  /** The id placements use: `harbour-bookshelf/left-side`. */
+  id: string;
+  kind: 'panel' | 'lining';
+  name: string;
+  cabinet: string;
+  widthMm: number;
+  heightMm: number;
+  thicknessMm: number;
+  quantity: number;
+  grain: 'height' | 'width' | 'none';
+  material: string;
+}
+
+/** Parts of one material and thickness nested on their own stock. */
+export interface CutPlanGroupDto {
+  key: string;
+  kind: 'panels' | 'lining';
+  /** "MDF 18 mm", "Lining 50 mm". */
+  label: string;
+  material: string;
+  thicknessMm: number;
+  /** Stock ids (CutPlanStockDto.id) offered to this group. */
+  stockIds: string[];
+  layout: Layout;
+}
+
+export interface CutPlanTotalsDto {
+  sheetsUsed: number;
+  remnantsUsed: number;
+  rollLengthMm: number;
+  /** null when no stock used has a price. */
+  cost: number | null;
+  costIncomplete: boolean;
+  liningMassKg: number | null;
+  partsPlaced: number;
+  partsUnplaced: number;
+  utilisation: number;
+  /** Stock area used that is neither parts nor kept offcuts (m²). */
+  wasteM2: number;
+}
+
+export interface CutPlanCabinetDto {
+  name: string;
+  designId: number;
+  count: number;
+  mirrored: boolean;
+}
+
+export interface CutPlanSummaryDto {
+  id: number;
+  buildId: number | null;
+  buildName: string;
+  mode: CutMode;
+  totals: CutPlanTotalsDto;
+  warningCount: number;
+  createdAt: string;
+  createdBy: string | null;
+}
+
+export interface CutPlanDto extends CutPlanSummaryDto {
+  settings: CutPlanSettings;
+  stock: CutPlanStockDto[];
+  parts: CutPlanPartDto[];
+  cabinets: CutPlanCabinetDto[];
+  groups: CutPlanGroupDto[];
+  warnings: { code: string; message: string; field?: string }[];
+}
+
+export const EXPORT_PAPERS = ['A4', 'Letter', 'A3', 'Tabloid', 'roll'] as const;
 
 // ─── E-mail, invitations, password reset ────────────────────────────────────────────────────────
 export interface MailMessageDto {
