@@ -80,6 +80,15 @@ async function liningShown(page: Page): Promise<Map<string, { width: number; hei
   return new Map(pieces.map((p) => [p.name, { width: p.width, height: p.height }]));
 }
 
+/** Polls a condition for up to 5 s (the form follows the studio after React's next render). */
+async function expectSoon(check: () => Promise<boolean>, message: string): Promise<void> {
+  for (let i = 0; i < 50; i++) {
+    if (await check()) return;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  expect(false, message);
+}
+
 function plannedOrThrow(design: Design): Plan {
   const r = planDesign(design);
   expect(r.ok, `the expected design should plan: ${r.ok ? '' : r.message}`);
@@ -217,6 +226,32 @@ const tests: E2ETest[] = [
       const b0 = at.design.braces[0]!;
       expect(b.type === 'shelf' && b0.type === 'shelf' && b.position === b0.position + 10, 'my brace position should be saved');
       expect(saved.design.outer.depth === at.design.outer.depth, 'keeping mine saves my depth over theirs');
+    },
+  },
+  {
+    name: 'the side form and the studio stay in step both ways',
+    async run(ctx) {
+      const { page, at } = await openStudioAs(ctx, DEMO.designer);
+      // Form → studio: a typed width reaches the studio's values and its figures.
+      const width = page.getByLabel('Width (W)');
+      await width.fill(String(at.design.outer.width + 10));
+      await width.blur();
+      const widened: Design = { ...at.design, outer: { ...at.design.outer, width: at.design.outer.width + 10 } };
+      const gross = plannedOrThrow(widened).volumes.grossLitres;
+      await page.waitForFunction((v) => document.querySelector('[data-testid=fig-gross]')?.getAttribute('data-value') === String(v), gross);
+      const shownWidth = await page.getByTestId('field-outer.width').inputValue();
+      expect(shownWidth === `${at.design.outer.width + 10} mm`, `the studio should show the typed width, it shows ${shownWidth}`);
+
+      // Studio → form: a drag ends in the form's brace position.
+      const grip = await pagePoint(page, widened, 'side', braceGrip(at.design));
+      await dragBy(page, grip, 0, -20 * grip.zoom);
+      const b0 = at.design.braces[0]!;
+      expect(b0.type === 'shelf', 'brace 0 is a shelf brace');
+      const formPos = page.getByTestId('brace').first().getByLabel(/Centre plane/);
+      await expectSoon(async () => Number(await formPos.inputValue()) === b0.position + 20, `the form should show the dragged brace at ${b0.position + 20}`);
+      // Undo in the studio goes back in the form too.
+      await page.getByRole('button', { name: 'Undo', exact: true }).click();
+      await expectSoon(async () => Number(await formPos.inputValue()) === b0.position, `after undo the form should show the brace at ${b0.position}`);
     },
   },
 ];

@@ -50,6 +50,30 @@ describe('dragging on the canvas', () => {
     expect(ed.getState().guides).toEqual([]);
   });
 
+  it('a brace snaps to other braces and the box centre, not to cut-out centres', () => {
+    const ed = makeEditor(bookshelf(), { grid: 'mm1' });
+    const zoom = ed.getState().camera.zoom;
+    const start = screenOf(ed, 'side', { z: 30, y: 215 });
+    ed.pointerDown({ screen: start, hit: 'brace:0' });
+    // The terminal on the back sits at y = 290: a drag to 289 stays at 289.
+    ed.pointerMove({ screen: { x: start.x, y: start.y - 74 * zoom } });
+    expect(ed.doc.braces[0]).toMatchObject({ position: 289 });
+    // The box centre, y = 180: a drag to 182 snaps onto it.
+    ed.pointerMove({ screen: { x: start.x, y: start.y + 33 * zoom } });
+    expect(ed.doc.braces[0]).toMatchObject({ position: 180 });
+    ed.pointerUp();
+  });
+
+  it('drags a bar brace in both axes of the side section (its y and z)', () => {
+    const ed = makeEditor(bookshelf(), { grid: 'mm1' });
+    ed.addBrace('bar'); // along x, centred: at [y 180, z 130]
+    const b = ed.doc.braces[1]!;
+    expect(b).toMatchObject({ type: 'bar', axis: 'x', at: [180, 130] });
+    drag(ed, 'side', 'brace:1', { z: 130, y: 180 }, -40, 60);
+    expect(ed.doc.braces[1]).toMatchObject({ at: [240, 90] });
+    expect(ed.getState().history.undo).toHaveLength(2); // the palette click and the drag
+  });
+
   it('resizes the box by its right edge: the width follows, one undo step', () => {
     const ed = makeEditor(bookshelf(), { grid: 'mm5' });
     drag(ed, 'front', 'edge:x', { x: 220, y: 180 }, 31, 0);

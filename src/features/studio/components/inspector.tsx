@@ -81,9 +81,19 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
           />
           {L(`Position (${b.axis})`, ['braces', i, 'position'], b.position, { min: -1 })}
           {L('Thickness', ['braces', i, 'thickness'], b.thickness)}
-          <p className="text-[12px] text-zinc-500">
-            {b.windows.length === 0 ? 'No windows: the brace closes the box into two chambers.' : `${b.windows.length} window${b.windows.length > 1 ? 's let' : ' lets'} air pass.`}
-          </p>
+          <WindowsEditor
+            windows={b.windows}
+            axes={otherAxes(b.axis)}
+            readOnly={readOnly}
+            L={(label, j, key, v) => L(label, ['braces', i, 'windows', j, key], v, { min: key === 'u' || key === 'v' ? -1 : 0 })}
+            onChange={(windows) => editor.setField(['braces', i, 'windows'], windows)}
+            newWindow={() => {
+              const c = cavity(doc);
+              const [u, v] = otherAxes(b.axis);
+              const span = Math.min(c[u].max - c[u].min, c[v].max - c[v].min);
+              return { shape: 'round', u: (c[u].min + c[u].max) / 2, v: (c[v].min + c[v].max) / 2, diameter: Math.round(span * 0.4) };
+            }}
+          />
           {notes}
         </Section>
       );
@@ -190,6 +200,64 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
       )}
       {notes}
     </Section>
+  );
+}
+
+type Win = Extract<StudioDoc['braces'][number], { type: 'shelf' }>['windows'][number];
+
+/** A shelf brace's windows (the openings that let air pass): centre on the brace, size, add and remove. */
+function WindowsEditor({
+  windows,
+  axes,
+  readOnly,
+  L,
+  onChange,
+  newWindow,
+}: {
+  windows: Win[];
+  axes: [Axis, Axis];
+  readOnly: boolean;
+  L: (label: string, index: number, key: string, valueMm: number) => React.ReactNode;
+  onChange(windows: Win[]): void;
+  newWindow(): Win;
+}) {
+  return (
+    <div className="space-y-2 rounded border border-zinc-200 p-2">
+      <div className="flex items-center justify-between">
+        <span className="text-[12px] text-zinc-600">
+          {windows.length === 0 ? 'No windows: the brace closes the box into two chambers.' : `Windows (${windows.length}) let air pass`}
+        </span>
+        {!readOnly && (
+          <button type="button" className="rounded px-1.5 py-0.5 text-[12px] text-accent-700 hover:bg-accent-50" onClick={() => onChange([...windows, newWindow()])}>
+            Add window
+          </button>
+        )}
+      </div>
+      {windows.map((w, j) => (
+        <div key={j} className="space-y-1.5 border-t border-zinc-100 pt-1.5">
+          <div className="flex items-center justify-between text-[12px] text-zinc-500">
+            <span>
+              Window {j + 1} · {w.shape === 'round' ? 'round' : 'rectangular'}
+            </span>
+            {!readOnly && (
+              <button type="button" className="rounded px-1.5 text-red-700 hover:bg-red-50" onClick={() => onChange(windows.filter((_, k) => k !== j))} aria-label={`Remove window ${j + 1}`}>
+                Remove
+              </button>
+            )}
+          </div>
+          {L(`Centre ${axes[0]}`, j, 'u', w.u)}
+          {L(`Centre ${axes[1]}`, j, 'v', w.v)}
+          {w.shape === 'round' ? (
+            L('Diameter', j, 'diameter', w.diameter)
+          ) : (
+            <>
+              {L(`Size along ${axes[0]}`, j, 'width', w.width)}
+              {L(`Size along ${axes[1]}`, j, 'height', w.height)}
+            </>
+          )}
+        </div>
+      ))}
+    </div>
   );
 }
 

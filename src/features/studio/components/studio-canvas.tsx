@@ -7,7 +7,7 @@
  */
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type ReactElement } from 'react';
 import type Konva from 'konva';
-import { Circle, Group, Layer, Line, Rect, Stage, Text } from 'react-konva';
+import { Circle, Group, Label, Layer, Line, Rect, Stage, Tag, Text } from 'react-konva';
 import type { Axis } from '../../../../shared/schemas/design.schema';
 import type { EditorState, StudioEditor } from '../model/editor';
 import { itemCoordMm, movableAxes, outerSizeMm } from '../model/geometry';
@@ -304,6 +304,24 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
     return out;
   };
 
+  /** The hovered item's warnings, in a small note beside it. */
+  const drawWarningNote = () => {
+    if (!hover || !warnings.has(hover.hit) || state.tool.name !== 'idle') return null;
+    const p = prims[hover.view].find((q) => q.hit === hover.hit && q.kind !== 'line');
+    if (!p) return null;
+    const at = p.kind === 'rect' ? toScreen(hover.view, p.x + p.w, p.y + p.h) : p.kind === 'circle' ? toScreen(hover.view, p.cx + p.r, p.cy + p.r * 0.71) : null;
+    if (!at) return null;
+    const text = warnings.get(hover.hit)!.join('\n');
+    const width = 260;
+    const x = Math.min(at.x + 14, size.width - width - 8);
+    return (
+      <Label x={x} y={Math.max(8, at.y - 4)} listening={false}>
+        <Tag fill="#fff8f1" stroke={WARN} strokeWidth={1} cornerRadius={4} shadowColor="#000" shadowOpacity={0.08} shadowBlur={6} />
+        <Text padding={8} width={width} text={text} fontSize={11.5} lineHeight={1.3} fontFamily={FONT} fill="#7c2d12" />
+      </Label>
+    );
+  };
+
   const drawGuides = () =>
     state.guides.map((g, i) => {
       const l = layout.views[g.view];
@@ -359,6 +377,7 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
               </Group>
             ))}
             {drawGuides()}
+            {drawWarningNote()}
             {state.selection?.kind === 'box' && (
               <Rect
                 listening={false}

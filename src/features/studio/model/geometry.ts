@@ -187,21 +187,20 @@ export function withItemCoords(doc: StudioDoc, sel: Selection, coords: Partial<R
 
 /**
  * Centre lines a coordinate snaps to along an axis: the middle of the outer box and of the cavity, and
- * the centres of the other items that sit on that axis.
+ * the centres of the other items of the same family on that axis (braces align with braces, openings
+ * with openings; a brace lined up with a cut-out's centre means nothing to a builder).
  */
 export function centreLinesMm(doc: StudioDoc, axis: Axis, except: Selection): number[] {
   const cav = cavity(doc);
   const lines = [outerSizeMm(doc, axis) / 2, (cav[axis].min + cav[axis].max) / 2];
-  doc.braces.forEach((_, index) => {
-    if (except?.kind === 'brace' && except.index === index) return;
-    const c = itemCoordMm(doc, { kind: 'brace', index }, axis);
-    if (c !== null) lines.push(c);
-  });
-  doc.openings.forEach((_, index) => {
-    if (except?.kind === 'opening' && except.index === index) return;
-    const c = itemCoordMm(doc, { kind: 'opening', index }, axis);
-    if (c !== null) lines.push(c);
-  });
+  if (except?.kind === 'brace' || except?.kind === 'opening') {
+    const items = except.kind === 'brace' ? doc.braces : doc.openings;
+    items.forEach((_, index) => {
+      if (index === except.index) return;
+      const c = itemCoordMm(doc, { kind: except.kind, index }, axis);
+      if (c !== null) lines.push(c);
+    });
+  }
   return [...new Set(lines)];
 }
 

@@ -176,11 +176,12 @@ export function projectView(doc: StudioDoc, view: ViewName): Prim[] {
       if (o.type === 'driver' && o.rebate && o.rebate.diameter > o.diameter) {
         prims.push({ kind: 'circle', role: 'rebate', cx, cy, r: o.rebate.diameter / 2, hit, dashed });
         prims.push({ kind: 'circle', role, cx, cy, r: o.diameter / 2, hit, dashed });
+      } else if (round && o.type === 'port' && (o.wall ?? 0) > 0) {
+        // The tube's wall as a ring, the bore inside it.
+        prims.push({ kind: 'circle', role: 'tube', cx, cy, r: sh / 2, hit, dashed });
+        prims.push({ kind: 'circle', role: 'port', cx, cy, r: (o.diameter ?? 0) / 2, hit, dashed });
       } else if (round) {
         prims.push({ kind: 'circle', role, cx, cy, r: sh / 2, hit, dashed });
-        if (o.type === 'port' && o.shape === 'round' && (o.wall ?? 0) > 0) {
-          prims.push({ kind: 'circle', role: 'tube', cx, cy, r: (o.diameter ?? 0) / 2, hit, dashed });
-        }
       } else {
         prims.push({ kind: 'rect', role, x: cx - sh / 2, y: cy - sv / 2, w: sh, h: sv, hit, dashed });
       }
