@@ -4,6 +4,7 @@ import type { Orm } from './db.js';
 import { hashPassword } from './modules/auth/password.js';
 import { User } from './modules/auth/user.entity.js';
 import { DesignsService } from './modules/designs/designs.service.js';
+import { StockService } from './modules/stock/stock.service.js';
 import { Membership } from './modules/workshops/membership.entity.js';
 import { Workshop } from './modules/workshops/workshop.entity.js';
 
@@ -17,6 +18,16 @@ export const DEMO_EMAILS = {
   viewer: 'viewer@harbourlane.test',
 } as const satisfies Record<Role, string>;
 export const DEMO_PEOPLE: ReadonlyArray<{ email: string; role: Role }> = ROLES.map((role) => ({ role, email: DEMO_EMAILS[role] }));
+
+/**
+ * The demo stock room (PRODUCT.md §9): 18 mm MDF sheets of 2440 × 1220 mm (MDF has no grain), one kept
+ * offcut, and 50 mm polyester batt on a 1200 mm roll. Prices are invented.
+ */
+export const DEMO_STOCK = [
+  { kind: 'sheet', material: 'MDF', thicknessMm: 18, widthMm: 2440, heightMm: 1220, quantity: 12, cost: 38.5, grain: 'none', note: 'demo' },
+  { kind: 'remnant', material: 'MDF', thicknessMm: 18, widthMm: 1220, heightMm: 610, quantity: 1, cost: 0, grain: 'none', note: 'kept offcut' },
+  { kind: 'roll', material: 'Polyester batt', thicknessMm: 50, widthMm: 1200, lengthMm: 12000, quantity: 1, cost: 6.2, grain: 'none', note: 'cost per metre' },
+] as const;
 
 /** Whether to seed: only a database that was just created, only when asked, never in production. */
 export function shouldSeed(opts: { wasNew: boolean; requested: boolean; nodeEnv: string | undefined }): boolean {
@@ -39,6 +50,8 @@ export async function seedDemo(orm: Orm): Promise<boolean> {
     // Through the service, so the demo designs pass the same checks as a user's save.
     const designs = new DesignsService(em);
     for (const design of [DEMO_BOOKSHELF, DEMO_FLOORSTANDER]) await designs.create(workshop.id, design, DEMO_EMAILS.designer);
+    const stock = new StockService(em);
+    for (const item of DEMO_STOCK) await stock.create(workshop.id, item, DEMO_EMAILS.maker);
     return true;
   });
 }

@@ -9,6 +9,10 @@ import { initOrm, migrate } from './db.js';
 import type { Logger } from './middleware/error-handler.js';
 import type { RateLimitOptions } from './modules/auth/rate-limit.js';
 import { seedDemo, shouldSeed } from './seed.js';
+import { createSmtpMailer, type Mailer } from './mail/mailer.js';
+import { startSmtpCatcher, type SmtpCatcher } from './mail/smtp-catcher.js';
+import { markMailCaught } from './modules/mail/mail.service.js';
+import { LocalDiskStorage, MemoryStorage, type FileStorage } from './storage/storage.js';
 import { createSessionStore } from './sessions.js';
 
 export interface StartOptions {
@@ -27,6 +31,12 @@ export interface StartOptions {
   /** The built client to serve; default dist/client; null for the API only. */
   clientDir?: string | null;
   loginLimit?: RateLimitOptions;
+  /** SMTP server for outgoing mail (nodemailer URL). Default env SMTP_URL; when unset, a local catcher is started. */
+  smtpUrl?: string;
+  /** Address links in e-mails point to. Default env PUBLIC_URL, else http://localhost:PORT. */
+  publicUrl?: string;
+  /** Folder for uploaded files. Default env UPLOADS_DIR, else uploads/ beside the database (memory for a memory database). */
+  uploadsDir?: string;
 }
 
 export interface RunningServer {
@@ -34,6 +44,8 @@ export interface RunningServer {
   port: number;
   /** Whether this start seeded the demo. */
   seeded: boolean;
+  /** The local SMTP catcher, when no SMTP_URL was given (development and tests). */
+  mailCatcher: SmtpCatcher | null;
   close(): Promise<void>;
 }
 
@@ -85,6 +97,39 @@ export async function startServer(opts: StartOptions = {}): Promise<RunningServe
 
     const sessions = await createSessionStore(sessionsPath);
     closeSessions = sessions.close;
+
+    // E-mail: a real SMTP server when configured, else the local catcher (PRODUCT.md §7: nothing beyond localhost).
+    const smtpUrl = opts.smtpUrl ?? process.env.SMTP_URL;
+    let mailCatcher: SmtpCatcher | null = null;
+    let mailer: Mailer;
+    if (smtpUrl) mailer = createSmtpMailer({ smtpUrl, from: process.env.MAIL_FROM || undefined });
+    else {
+      mailCatcher = await startSmtpCatcher({
+        logError: logger.error,
+        onMessage: async (m) => {
+          await markMailCaught(orm.em, m.messageId, m.receivedAt);
+          logger.info(`Mail caught by the local catcher: to ${m.to.join(', ')} — "${m.subject}"`);
+          // Account mail (a password reset) belongs to no workshop, so no owner sees it: show its link here.
+          if (m.headers['x-boxwright-kind'] === 'password-reset') {
+            const link = /https?:\/\/\S+/.exec(m.text)?.[0];
+            if (link) logger.info(`  password link: ${link}`);
+          }
+        },
+      });
+      mailer = createSmtpMailer({ smtpUrl: mailCatcher.url, via: 'catcher', from: process.env.MAIL_FROM || undefined });
+    }
+    const closeMail = async () => {
+      mailer.close();
+      await mailCatcher?.close();
+    };
+    closeSessions = async () => {
+      await sessions.close();
+      await closeMail();
+    };
+    const uploadsDir = opts.uploadsDir ?? (process.env.UPLOADS_DIR || (dbPath === ':memory:' ? null : path.join(path.dirname(path.resolve(dbPath)), 'uploads')));
+    const storage: FileStorage = uploadsDir ? new LocalDiskStorage(uploadsDir) : new MemoryStorage();
+    let listeningPort = port;
+    const publicUrl = (opts.publicUrl ?? process.env.PUBLIC_URL ?? '').replace(/\/+$/, '');
     const app = createApp({
       orm,
       sessionStore: sessions.store,
@@ -94,6 +139,9 @@ export async function startServer(opts: StartOptions = {}): Promise<RunningServe
       loginLimit: opts.loginLimit,
       clientDir: opts.clientDir === undefined ? DEFAULT_CLIENT_DIR : opts.clientDir,
       logger,
+      mailer,
+      storage,
+      publicUrl: () => publicUrl || `http://localhost:${listeningPort}`,
     });
     if (opts.clientDir !== null && !existsSync(path.join(opts.clientDir ?? DEFAULT_CLIENT_DIR, 'index.html'))) {
       logger.warn('No built client in dist/client (run `npx vite build`); serving the API only.');
@@ -108,11 +156,14 @@ export async function startServer(opts: StartOptions = {}): Promise<RunningServe
       });
     });
     const actualPort = (server.address() as AddressInfo).port;
+    listeningPort = actualPort;
+    if (mailCatcher) logger.info(`E-mail goes to the local catcher at ${mailCatcher.url} (set SMTP_URL to send for real); owners read it on the Sent mail page.`);
     let closing: Promise<void> | undefined;
     return {
       url: `http://127.0.0.1:${actualPort}`,
       port: actualPort,
       seeded,
+      mailCatcher,
       close: () =>
         (closing ??= (async () => {
           await new Promise<void>((resolve) => {
@@ -120,6 +171,7 @@ export async function startServer(opts: StartOptions = {}): Promise<RunningServe
             server.closeAllConnections();
           });
           await sessions.close();
+          await closeMail();
           await orm.close(true);
         })()),
     };

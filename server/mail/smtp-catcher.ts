@@ -84,17 +84,18 @@ export async function startSmtpCatcher(opts: CatcherOptions = {}): Promise<SmtpC
             };
             caught.push(mail);
             if (caught.length > keep) caught.splice(0, caught.length - keep);
+            // Recorded before the SMTP answer, so when the sender's send() resolves the record says "caught".
+            try {
+              await opts.onMessage?.(mail);
+            } catch (err) {
+              (opts.logError ?? console.error)('Mail catcher: could not record a caught message', err);
+            }
+            callback();
             for (const w of waiters) {
               if (w.match(mail)) {
                 waiters.delete(w);
                 w.resolve(mail);
               }
-            }
-            callback();
-            try {
-              await opts.onMessage?.(mail);
-            } catch (err) {
-              (opts.logError ?? console.error)('Mail catcher: could not record a caught message', err);
             }
           })
           .catch((err: unknown) => callback(err instanceof Error ? err : new Error(String(err))));

@@ -5,7 +5,7 @@
 import type { Express } from 'express';
 import type { Store } from 'express-session';
 import request from 'supertest';
-import { createApp } from '../../server/app.js';
+import { createApp, type AppDeps } from '../../server/app.js';
 import { initOrm, migrate, type Orm } from '../../server/db.js';
 import type { Logger } from '../../server/middleware/error-handler.js';
 import type { RateLimitOptions } from '../../server/modules/auth/rate-limit.js';
@@ -24,7 +24,9 @@ export interface TestApp {
 
 const GENEROUS: RateLimitOptions = { windowMs: 60_000, limit: 10_000 };
 
-export async function buildTestApp(opts: { seed?: boolean; loginLimit?: RateLimitOptions; signupLimit?: RateLimitOptions } = {}): Promise<TestApp> {
+export async function buildTestApp(
+  opts: { seed?: boolean; loginLimit?: RateLimitOptions; signupLimit?: RateLimitOptions; deps?: Partial<AppDeps> } = {},
+): Promise<TestApp> {
   const orm = await initOrm({ dbName: ':memory:' });
   await migrate(orm);
   if (opts.seed ?? true) await seedDemo(orm);
@@ -42,6 +44,7 @@ export async function buildTestApp(opts: { seed?: boolean; loginLimit?: RateLimi
     loginLimit: opts.loginLimit ?? GENEROUS,
     signupLimit: opts.signupLimit ?? GENEROUS,
     logger,
+    ...opts.deps,
   });
   return {
     app,

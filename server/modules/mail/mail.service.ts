@@ -73,16 +73,16 @@ export class MailService {
     return { sent, id: record.id };
   }
 
-  /** The local catcher received a message: stamp its record. */
-  async markCaught(messageId: string | null, at: Date): Promise<void> {
-    if (!messageId) return;
-    const id = messageId.startsWith('<') ? messageId : `<${messageId}>`;
-    await this.em.fork().nativeUpdate(MailMessage, { messageId: id }, { caughtAt: at });
-  }
-
   /** What was sent for a workshop, newest first (owner only; account mail such as password resets is never listed). */
   async list(workshopId: number, limit = 200): Promise<MailMessageDto[]> {
     const rows = await this.em.find(MailMessage, { workshop: workshopId }, { orderBy: { sentAt: 'desc', id: 'desc' }, limit });
     return rows.map(toDto);
   }
+}
+
+/** The local catcher received a message: stamp its record (matched by Message-ID). */
+export async function markMailCaught(em: EntityManager, messageId: string | null, at: Date): Promise<void> {
+  if (!messageId) return;
+  const id = messageId.startsWith('<') ? messageId : `<${messageId}>`;
+  await em.fork().nativeUpdate(MailMessage, { messageId: id }, { caughtAt: at });
 }
