@@ -62,23 +62,40 @@ export function hatchLines(x: number, y: number, w: number, h: number, gap: numb
 /** Smallest label text (mm) before a part shows only its number: about 4.5 pt. */
 const MIN_LABEL_MM = 1.6;
 
+/** `value` in two lines, broken at the space nearest its middle (one line when it has no space). */
+function splitInTwo(value: string): string[] {
+  const spaces = [...value.matchAll(/ /g)].map((m) => m.index);
+  if (spaces.length === 0) return [value];
+  const at = spaces.reduce((best, i) => (Math.abs(i - value.length / 2) < Math.abs(best - value.length / 2) ? i : best));
+  return [value.slice(0, at), value.slice(at + 1)];
+}
+
 function partLabelPrims(x: number, y: number, w: number, h: number, n: number, part: CutPart | undefined, widthMm: number, heightMm: number, d: Decor): Prim[] {
   const cx = x + w / 2;
   const cy = y + h / 2;
-  const lines = [`${n}. ${part?.name ?? '?'}`, `${fmtMm(widthMm)} × ${fmtMm(heightMm)}`, part?.cabinet ?? ''].filter(Boolean);
+  const title = `${n}. ${part?.name ?? '?'}`;
+  const size = `${fmtMm(widthMm)} × ${fmtMm(heightMm)}`;
+  const cabinet = part?.cabinet ? [part.cabinet] : [];
+  const broken = splitInTwo(title);
+  // Candidate labels, best first: [lines, how many of them are the (bold) title].
+  const candidates: [string[], number][] = [
+    [[title, size, ...cabinet], 1],
+    [[title, size], 1],
+    [[...broken, size], broken.length],
+    [[title], 1],
+    [broken, broken.length],
+  ];
   const minMm = MIN_LABEL_MM * (d.textMm / 3.2);
   // Fewer lines at a readable size beat more lines in small print: the first pass wants 70 % of full size.
   for (const wanted of [d.textMm * 0.7, minMm]) {
-    for (let count = lines.length; count >= 1; count--) {
-      const shown = lines.slice(0, count);
+    for (const [lines, bold] of candidates) {
       // The largest size (up to d.textMm) at which every line fits 92 % of the width and the block 90 % of the height.
-      const widthLimit = Math.min(...shown.map((l, i) => (w * 0.92) / (estimateTextWidthMm(l, 1, i === 0 ? 'bold' : 'regular') * (i === 0 ? 1 : 0.85))));
-      const heightLimit = (h * 0.9) / (shown.length * 1.25);
-      const size = Math.min(d.textMm, widthLimit, heightLimit);
-      if (size >= wanted) {
-        const lh = size * 1.25;
-        const top = cy - (shown.length * lh) / 2 + size * 0.85;
-        return shown.map((l, i) => text(cx, top + i * lh, l, i === 0 ? size : size * 0.85, { align: 'center', font: i === 0 ? 'bold' : 'regular', color: '#1d3557' }));
+      const widthLimit = Math.min(...lines.map((l, i) => (w * 0.92) / (estimateTextWidthMm(l, 1, i < bold ? 'bold' : 'regular') * (i < bold ? 1 : 0.85))));
+      const fontMm = Math.min(d.textMm * 0.85, widthLimit, (h * 0.9) / (lines.length * 1.25));
+      if (fontMm >= wanted) {
+        const lh = fontMm * 1.25;
+        const top = cy - (lines.length * lh) / 2 + fontMm * 0.85;
+        return lines.map((l, i) => text(cx, top + i * lh, l, i < bold ? fontMm : fontMm * 0.85, { align: 'center', font: i < bold ? 'bold' : 'regular', color: '#1d3557' }));
       }
     }
   }
@@ -122,13 +139,25 @@ export function sheetPrims(sheet: LayoutSheet, parts: ReadonlyMap<string, CutPar
   for (const c of [...sheet.cuts].sort((a, b) => a.order - b.order)) {
     prims.push(line(x0 + S(c.x1), y0 + S(c.y1), x0 + S(c.x2), y0 + S(c.y2), scaled(CUT_ORDER_LINE, d.lineScale)));
   }
-  for (const c of sheet.cuts) {
-    // The cut's number sits near its start, where the saw enters.
-    const horizontal = Math.abs(c.y2 - c.y1) < Math.abs(c.x2 - c.x1);
-    const bx = x0 + S(c.x1) + (horizontal ? badge * 1.6 : 0);
-    const by = y0 + S(c.y1) + (horizontal ? 0 : badge * 1.6);
-    prims.push({ kind: 'circle', cx: bx, cy: by, r: badge, fill: '#ffffff', stroke: scaled(CUT_ORDER_LINE, d.lineScale) });
-    prims.push(text(bx, by + badge * 0.38, String(c.order), badge * 1.05, { align: 'center', font: 'bold', color: CUT_ORDER_LINE.color }));
+  // Each cut's number sits on its line near where the saw enters, moved along the line when it would
+  // cover another number.
+  const badges: [number, number][] = [];
+  for (const c of [...sheet.cuts].sort((a, b) => a.order - b.order)) {
+    const len = S(Math.hypot(c.x2 - c.x1, c.y2 - c.y1));
+    const ux = len > 0 ? S(c.x2 - c.x1) / len : 0;
+    const uy = len > 0 ? S(c.y2 - c.y1) / len : 0;
+    const at = (t: number): [number, number] => [x0 + S(c.x1) + ux * t, y0 + S(c.y1) + uy * t];
+    let spot = at(Math.min(badge * 1.6, len / 2));
+    for (let t = badge * 1.6; t <= len - badge; t += badge * 1.2) {
+      const p = at(t);
+      if (badges.every(([bx, by]) => Math.hypot(bx - p[0], by - p[1]) >= badge * 2.2)) {
+        spot = p;
+        break;
+      }
+    }
+    badges.push(spot);
+    prims.push({ kind: 'circle', cx: spot[0], cy: spot[1], r: badge, fill: '#ffffff', stroke: scaled(CUT_ORDER_LINE, d.lineScale) });
+    prims.push(text(spot[0], spot[1] + badge * 0.38, String(c.order), badge * 1.05, { align: 'center', font: 'bold', color: CUT_ORDER_LINE.color }));
   }
   return prims;
 }
@@ -149,7 +178,7 @@ function sheetTitle(n: NumberedSheet, stock: readonly StockInfo[]): string {
   const info = stock.find((s) => s.id === n.sheet.stockId);
   const material = [info?.material, info?.thickness !== undefined ? `${fmtMm(info.thickness)} mm` : undefined].filter(Boolean).join(' ');
   const size = n.kind === 'roll' ? `${fmtMm(n.sheet.width)} mm wide, ${fmtMm(n.sheet.height)} mm used` : `${fmtMm(n.sheet.width)} × ${fmtMm(n.sheet.height)} mm`;
-  return `${kindWord(n)} ${n.kind === 'roll' ? n.label.replace('roll ', '') : n.label}${material ? ` · ${material}` : ''} · ${size} · stock "${n.sheet.stockId}"`;
+  return `${sheetName(n)}${material ? ` · ${material}` : ''} · ${size} · stock "${n.sheet.stockId}"`;
 }
 
 function sheetStats(n: NumberedSheet, kerfMm: number | undefined): string {
@@ -176,45 +205,80 @@ function pageSize(paper: SheetPaperName, landscape: boolean): { w: number; h: nu
   return landscape ? { w: p.heightMm, h: p.widthMm } : { w: p.widthMm, h: p.heightMm };
 }
 
+/** Room kept at the foot of every page for the caution (two lines) and the page number. */
+const FOOT_MM = 9;
+
 function footer(page: { w: number; h: number }, title: string, pageNo: number, pageCount: number): Prim[] {
-  return [
-    text(MARGIN, page.h - MARGIN / 2 - 2.4, CUT_DIAGRAM_FOOT_CAUTION, 2.3, { color: '#7a1f00' }),
-    text(page.w - MARGIN, page.h - MARGIN / 2 + 1, `${title} · page ${pageNo} of ${pageCount}`, 2.4, { align: 'right', color: '#777777' }),
-  ];
+  const caution = textBlock(MARGIN, page.h - MARGIN - FOOT_MM + 3, CUT_DIAGRAM_FOOT_CAUTION, page.w - 2 * MARGIN, 2.3, { color: '#7a1f00' });
+  return [...caution.prims, text(page.w - MARGIN, page.h - MARGIN / 2 + 1, `${title} · page ${pageNo} of ${pageCount}`, 2.4, { align: 'right', color: '#777777' })];
 }
 
-function sheetPage(n: NumberedSheet, input: CutDiagramInput, parts: ReadonlyMap<string, CutPart>, paper: SheetPaperName, sheetCount: number, index: number): Page {
+/** Text at up to `sizeMm`, smaller if needed to fit `widthMm`. */
+function fitted(x: number, y: number, value: string, widthMm: number, sizeMm: number, font: 'regular' | 'bold' = 'regular'): Prim {
+  const size = Math.min(sizeMm, widthMm / estimateTextWidthMm(value, 1, font));
+  return text(x, y, value, size, { font });
+}
+
+const LEGEND_MM = 2.5;
+const LEGEND_LINE_MM = 3.3;
+
+function legendLine(i: number, p: LayoutSheet['placements'][number], part: CutPart | undefined): string {
+  const [pw, ph] = p.rotated ? [p.height, p.width] : [p.width, p.height];
+  return `${i + 1}. ${part?.name ?? p.partId} · ${fmtMm(pw)} × ${fmtMm(ph)}${p.rotated ? ' (turned)' : ''}${part ? ` · ${part.cabinet}` : ''}`;
+}
+
+/** The placements' numbers and names in columns from (x, y), `rows` to a column. */
+function legendPrims(lines: readonly string[], x: number, y: number, widthMm: number, cols: number, rows: number): Prim[] {
+  const colW = widthMm / cols;
+  return lines.map((l, i) => text(x + Math.floor(i / rows) * colW, y + (i % rows) * LEGEND_LINE_MM, clip(l, colW - 2, LEGEND_MM), LEGEND_MM));
+}
+
+function sheetName(n: NumberedSheet): string {
+  return `${kindWord(n)} ${n.kind === 'roll' ? n.label.replace('roll ', '') : n.label}`;
+}
+
+/** The sheet's page, and when its parts list would crowd the drawing, pages with the list alone. */
+function sheetPages(n: NumberedSheet, input: CutDiagramInput, parts: ReadonlyMap<string, CutPart>, paper: SheetPaperName, sheetCount: number, index: number): Page[] {
   const s = n.sheet;
   const page = pageSize(paper, s.width >= s.height);
   const stock = input.stock ?? [];
-  const prims: Prim[] = [];
-  prims.push(text(MARGIN, MARGIN + 4, `${sheetTitle(n, stock)}   (${index + 1} of ${sheetCount})`, 4.2, { font: 'bold' }));
   const info = stock.find((x) => x.id === s.stockId);
-  const grain = info?.grain === 'length' ? ' · grain along the length' : '';
-  // Legend under the drawing: every placement with its number.
-  const legendCols = page.w > page.h ? 3 : 2;
-  const legendRows = Math.ceil(s.placements.length / legendCols);
-  const legendLh = 3.3;
-  const legendH = legendRows > 0 ? legendRows * legendLh + 4 : 0;
-  const top = MARGIN + 13;
-  const bottom = page.h - MARGIN - 6 - legendH;
   const availW = page.w - 2 * MARGIN;
-  const availH = bottom - top;
+  const prims: Prim[] = [fitted(MARGIN, MARGIN + 4, `${sheetTitle(n, stock)}   (${index + 1} of ${sheetCount})`, availW, 4.2, 'bold')];
+  const top = MARGIN + 13;
+  const floor = page.h - MARGIN - FOOT_MM;
+  // The parts list goes under the drawing when it takes at most 30 % of the room, else on pages of its own.
+  const cols = page.w > page.h ? 3 : 2;
+  const lines = s.placements.map((p, i) => legendLine(i, p, parts.get(p.partId)));
+  const rows = Math.ceil(lines.length / cols);
+  const legendH = rows > 0 ? rows * LEGEND_LINE_MM + 4 : 0;
+  const inline = legendH <= 0.3 * (floor - top);
+  const availH = floor - top - (inline ? legendH : 6);
   const scale = Math.min(availW / s.width, availH / s.height);
-  prims.push(text(MARGIN, MARGIN + 9.5, `${sheetStats(n, input.kerfMm)} · scale 1:${(1 / scale).toFixed(1)}${grain}`, 3));
-  const x0 = MARGIN + (availW - s.width * scale) / 2;
-  prims.push(...sheetPrims(s, parts, x0, top, scale, { textMm: 3.2, lineScale: 1 }, info?.trim ?? 0));
-  const colW = availW / legendCols;
-  const ly = top + s.height * scale + 5;
-  s.placements.forEach((p, i) => {
-    const part = parts.get(p.partId);
-    const [pw, ph] = p.rotated ? [p.height, p.width] : [p.width, p.height];
-    const label = `${i + 1}. ${part?.name ?? p.partId} — ${part?.cabinet ?? ''} · ${fmtMm(pw)} × ${fmtMm(ph)}${p.rotated ? ' (turned)' : ''}`;
-    const col = Math.floor(i / legendRows);
-    const row = i % legendRows;
-    prims.push(text(MARGIN + col * colW, ly + row * legendLh, clip(label, colW - 2, 2.5), 2.5));
-  });
-  return { widthMm: page.w, heightMm: page.h, prims };
+  const grain = info?.grain === 'length' ? ' · grain along the length' : '';
+  prims.push(fitted(MARGIN, MARGIN + 9.5, `${sheetStats(n, input.kerfMm)} · scale 1:${(1 / scale).toFixed(1)}${grain}`, availW, 3));
+  prims.push(...sheetPrims(s, parts, MARGIN + (availW - s.width * scale) / 2, top, scale, { textMm: 3.2, lineScale: 1 }, info?.trim ?? 0));
+  const pages: Page[] = [{ widthMm: page.w, heightMm: page.h, prims }];
+  if (inline) {
+    prims.push(...legendPrims(lines, MARGIN, top + s.height * scale + 5, availW, cols, rows));
+    return pages;
+  }
+  prims.push(text(MARGIN, top + s.height * scale + 5, `${sheetName(n)}: the list of its ${lines.length} parts is on the next page.`, 2.8, { color: '#444444' }));
+  const list = pageSize(paper, true);
+  const listCols = 3;
+  const perPage = Math.floor((list.h - MARGIN - FOOT_MM - top) / LEGEND_LINE_MM) * listCols;
+  for (let k = 0; k < lines.length; k += perPage) {
+    const chunk = lines.slice(k, k + perPage);
+    pages.push({
+      widthMm: list.w,
+      heightMm: list.h,
+      prims: [
+        fitted(MARGIN, MARGIN + 4, `${sheetName(n)}: parts, numbered as on the diagram`, list.w - 2 * MARGIN, 4.2, 'bold'),
+        ...legendPrims(chunk, MARGIN, top, list.w - 2 * MARGIN, listCols, Math.ceil(chunk.length / listCols)),
+      ],
+    });
+  }
+  return pages;
 }
 
 /** Shortens `value` with an ellipsis so that it fits `widthMm` (by the estimate). */
@@ -230,7 +294,7 @@ function money(v: number, currency?: string): string {
 }
 
 /** Lines of the totals block. */
-export function totalsLines(t: MaterialTotals, currency?: string): string[] {
+export function totalsLines(t: MaterialTotals, currency?: string, parts: ReadonlyMap<string, CutPart> = new Map()): string[] {
   const lines: string[] = [];
   for (const u of t.stock) {
     const what = [u.material, u.thickness !== undefined ? `${fmtMm(u.thickness)} mm` : undefined].filter(Boolean).join(' ');
@@ -242,7 +306,14 @@ export function totalsLines(t: MaterialTotals, currency?: string): string[] {
   lines.push(`Material cost: ${t.cost === null ? 'no prices given' : money(t.cost, currency)}${t.costIncomplete ? ' (some stock has no price)' : ''}`);
   if (t.liningMassKg !== undefined) lines.push(`Lining weight: ${t.liningMassKg.toFixed(2)} kg`);
   lines.push(`Parts placed: ${t.partsPlaced} · overall utilisation ${percent(t.utilisation)}`);
-  if (t.partsUnplaced > 0) lines.push(`NOT PLACED: ${t.partsUnplaced} part${t.partsUnplaced === 1 ? '' : 's'} — add stock and plan again`);
+  if (t.partsUnplaced > 0) {
+    lines.push(`NOT PLACED: ${t.partsUnplaced} part${t.partsUnplaced === 1 ? '' : 's'} — add stock and plan again`);
+    for (const u of t.unplaced) {
+      const p = parts.get(u.partId);
+      const what = p ? `${p.name} (${p.cabinet}), ${fmtMm(p.widthMm)} × ${fmtMm(p.heightMm)} × ${fmtMm(p.thicknessMm)} mm ${p.material}` : u.partId;
+      lines.push(`NOT PLACED: ${u.quantity} × ${what}${u.reason ? ` — ${u.reason}` : ''}`);
+    }
+  }
   return lines;
 }
 
@@ -300,7 +371,7 @@ function tablePages(input: CutDiagramInput, paper: SheetPaperName): Page[] {
     y += lh;
   });
   // Totals and cautions, on the same page if they fit.
-  const totalLines = totalsLines(totals, input.currency);
+  const totalLines = totalsLines(totals, input.currency, new Map(input.parts.map((p) => [p.id, p])));
   const cautionH = CUT_DIAGRAM_CAUTIONS.length * 9 + 10;
   if (y + 12 + totalLines.length * 5 + cautionH > limit) newPage('Totals and cautions');
   else y += 6;
@@ -325,7 +396,7 @@ function tablePages(input: CutDiagramInput, paper: SheetPaperName): Page[] {
 export function buildCutDiagramPages(input: CutDiagramInput, paper: SheetPaperName = 'A4'): Page[] {
   const parts = new Map(input.parts.map((p) => [p.id, p]));
   const numbered = numberSheets(input.layouts, input.stock ?? []);
-  const pages = [...numbered.map((n, i) => sheetPage(n, input, parts, paper, numbered.length, i)), ...tablePages(input, paper)];
+  const pages = [...numbered.flatMap((n, i) => sheetPages(n, input, parts, paper, numbered.length, i)), ...tablePages(input, paper)];
   pages.forEach((p, i) => p.prims.push(...footer({ w: p.widthMm, h: p.heightMm }, input.title, i + 1, pages.length)));
   return pages;
 }

@@ -132,6 +132,8 @@ export interface MaterialTotals {
   costIncomplete: boolean;
   partsPlaced: number;
   partsUnplaced: number;
+  /** What found no place, and why when the layout says. */
+  unplaced: { partId: string; quantity: number; reason?: string }[];
   /** Part area / stock area used, 0..1. */
   utilisation: number;
   liningMassKg?: number;
@@ -181,6 +183,7 @@ export function materialTotals(layouts: readonly Layout[], stock: readonly Stock
     costIncomplete: priced.length > 0 && priced.length < list.length,
     partsPlaced: layouts.reduce((a, l) => a + l.sheets.reduce((b, s) => b + s.placements.length, 0), 0),
     partsUnplaced: layouts.reduce((a, l) => a + l.unplaced.reduce((b, u) => b + u.quantity, 0), 0),
+    unplaced: layouts.flatMap((l) => l.unplaced),
     utilisation: stockArea > 0 ? partArea / stockArea : 0,
   };
   if (liningMassKg !== undefined) totals.liningMassKg = liningMassKg;

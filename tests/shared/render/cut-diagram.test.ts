@@ -54,7 +54,7 @@ describe('cut diagram pages', () => {
     const t = textsOn(0);
     expect(t).toContain('3. Back');
     expect(t).toContain('220 × 360');
-    expect(t).toContain('5. Left side — Harbour bookshelf · 224 × 360 (turned)');
+    expect(t).toContain('5. Left side · 224 × 360 (turned) · Harbour bookshelf');
   });
 
   it('numbers the guillotine cuts in cut order along red lines', () => {
@@ -113,12 +113,15 @@ describe('cut diagram pages', () => {
     for (let p = 0; p < 3; p++) expect(textsOn(p).some((x) => x.startsWith('Caution: wood dust'))).toBe(true);
   });
 
-  it('warns in red about parts that found no place', () => {
-    const layout: Layout = { ...SMALL_LAYOUT, unplaced: [{ partId: 'back', quantity: 2 }] };
+  it('warns in red about parts that found no place, saying why', () => {
+    const layout: Layout = { ...SMALL_LAYOUT, unplaced: [{ partId: 'back', quantity: 2, reason: 'no stock of this material and thickness' }] };
     const { sink } = draw({ ...INPUT, layouts: [layout] });
-    const warn = sink.texts.find((t) => t.text.startsWith('NOT PLACED'))!;
-    expect(warn.text).toBe('NOT PLACED: 2 parts — add stock and plan again');
-    expect(warn.color).toBe('#b71c1c');
+    const warn = sink.texts.filter((t) => t.text.startsWith('NOT PLACED'));
+    expect(warn.map((w) => w.text)).toEqual([
+      'NOT PLACED: 2 parts — add stock and plan again',
+      'NOT PLACED: 2 × Back (Harbour bookshelf), 220 × 360 × 18 mm MDF — no stock of this material and thickness',
+    ]);
+    for (const w of warn) expect(w.color).toBe('#b71c1c');
   });
 
   it('runs the cut list onto more pages when it is long', () => {
@@ -153,7 +156,7 @@ describe('cut diagram SVG', () => {
   });
   it('escapes names for XML', () => {
     const svg = cutDiagramSvgs({ ...INPUT, parts: [{ ...SMALL_PARTS[0]!, name: 'Front <A> & "B"' }, ...SMALL_PARTS.slice(1)] })[0]!.svg;
-    expect(svg).toContain('Front &lt;A&gt; &amp; &quot;B&quot;');
+    for (const piece of ['&lt;A&gt;', '&amp;', '&quot;B&quot;']) expect(svg).toContain(piece);
     expect(svg).not.toContain('<A>');
   });
 });
