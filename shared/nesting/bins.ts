@@ -74,10 +74,6 @@ export interface PackBin {
   topY(): number;
 }
 
-function better(s1: number, s2: number, cand: Candidate): boolean {
-  return s1 < cand.s1 - EPS || (s1 <= cand.s1 + EPS && s2 < cand.s2 - EPS);
-}
-
 function overlapLength(a0: number, a1: number, b0: number, b1: number): number {
   const lo = a0 > b0 ? a0 : b0;
   const hi = a1 < b1 ? a1 : b1;
@@ -87,10 +83,9 @@ function overlapLength(a0: number, a1: number, b0: number, b1: number): number {
 abstract class BaseBin implements PackBin {
   usedArea = 0;
   readonly placements: Placed[] = [];
-  protected fx: number[] = [];
-  protected fy: number[] = [];
-  protected fw: number[] = [];
-  protected fh: number[] = [];
+  /** Free rectangles: x, y, w, h at 4·i … 4·i+3; `count` of them. */
+  protected r: number[] = [];
+  protected count = 0;
   protected top = 0;
 
   constructor(
@@ -99,10 +94,20 @@ abstract class BaseBin implements PackBin {
     /** Free rectangles narrower than this in either side can never hold a part and are dropped. */
     protected readonly minSide: number,
   ) {
-    this.fx.push(0);
-    this.fy.push(0);
-    this.fw.push(width);
-    this.fh.push(height);
+    this.push(0, 0, width, height);
+  }
+
+  protected push(x: number, y: number, w: number, h: number): void {
+    const o = 4 * this.count++;
+    const r = this.r;
+    if (o >= r.length) {
+      r.push(x, y, w, h);
+    } else {
+      r[o] = x;
+      r[o + 1] = y;
+      r[o + 2] = w;
+      r[o + 3] = h;
+    }
   }
 
   protected contactScore(x: number, y: number, w: number, h: number): number {
@@ -119,15 +124,16 @@ abstract class BaseBin implements PackBin {
   }
 
   consider(w: number, h: number, rotated: boolean, rule: number, cand: Candidate, binIndex: number): void {
-    const { fx, fy, fw, fh } = this;
-    const n = fx.length;
-    work.n += n;
+    const r = this.r;
+    const n = this.count;
+    work.n += n + 6;
     for (let i = 0; i < n; i++) {
-      const rw = fw[i]!;
-      const rh = fh[i]!;
+      const o = 4 * i;
+      const rw = r[o + 2]!;
+      const rh = r[o + 3]!;
       if (w > rw + EPS || h > rh + EPS) continue;
-      const x = fx[i]!;
-      const y = fy[i]!;
+      const x = r[o]!;
+      const y = r[o + 1]!;
       let s1: number;
       let s2: number;
       const lw = rw - w;
@@ -154,7 +160,7 @@ abstract class BaseBin implements PackBin {
           s2 = y + h;
           break;
       }
-      if (better(s1, s2, cand)) {
+      if (s1 < cand.s1 - EPS || (s1 <= cand.s1 + EPS && s2 < cand.s2 - EPS)) {
         cand.s1 = s1;
         cand.s2 = s2;
         cand.x = x;
@@ -178,7 +184,7 @@ abstract class BaseBin implements PackBin {
 
   freeRects(): [number, number, number, number][] {
     const out: [number, number, number, number][] = [];
-    for (let i = 0; i < this.fx.length; i++) out.push([this.fx[i]!, this.fy[i]!, this.fw[i]!, this.fh[i]!]);
+    for (let i = 0; i < this.count; i++) out.push([this.r[4 * i]!, this.r[4 * i + 1]!, this.r[4 * i + 2]!, this.r[4 * i + 3]!]);
     return out;
   }
 
@@ -187,98 +193,91 @@ abstract class BaseBin implements PackBin {
   }
 }
 
+/** Scratch space for the rectangles a placement creates. */
+let fresh = new Float64Array(256);
+
 /** Maximal-rectangles free space: every part sits at a corner of a maximal free rectangle. */
 export class MaxRectsBin extends BaseBin {
-  private nx: number[] = [];
-  private ny: number[] = [];
-  private nw: number[] = [];
-  private nh: number[] = [];
-
   place(cand: Candidate, item: number): void {
     this.record(cand, item);
     const x = cand.x;
     const y = cand.y;
     const x2 = x + cand.w;
     const y2 = y + cand.h;
-    const { fx, fy, fw, fh, nx, ny, nw, nh, minSide } = this;
-    nx.length = 0;
-    ny.length = 0;
-    nw.length = 0;
-    nh.length = 0;
+    const minSide = this.minSide - EPS;
+    const r = this.r;
+    const n = this.count;
+    if (fresh.length < 16 * n + 16) fresh = new Float64Array(32 * n + 32);
+    const f = fresh;
+    let m = 0;
     let keep = 0;
-    const n = fx.length;
     for (let i = 0; i < n; i++) {
-      const rx = fx[i]!;
-      const ry = fy[i]!;
-      const rw = fw[i]!;
-      const rh = fh[i]!;
+      const o = 4 * i;
+      const rx = r[o]!;
+      const ry = r[o + 1]!;
+      const rw = r[o + 2]!;
+      const rh = r[o + 3]!;
       const rx2 = rx + rw;
       const ry2 = ry + rh;
       if (x >= rx2 - EPS || x2 <= rx + EPS || y >= ry2 - EPS || y2 <= ry + EPS) {
-        fx[keep] = rx;
-        fy[keep] = ry;
-        fw[keep] = rw;
-        fh[keep] = rh;
-        keep++;
+        const k = 4 * keep++;
+        r[k] = rx;
+        r[k + 1] = ry;
+        r[k + 2] = rw;
+        r[k + 3] = rh;
         continue;
       }
-      if (x > rx + EPS && x - rx >= minSide - EPS && rh >= minSide - EPS) {
-        nx.push(rx); ny.push(ry); nw.push(x - rx); nh.push(rh);
+      if (x > rx + EPS && x - rx >= minSide && rh >= minSide) {
+        f[m] = rx; f[m + 1] = ry; f[m + 2] = x - rx; f[m + 3] = rh; m += 4;
       }
-      if (x2 < rx2 - EPS && rx2 - x2 >= minSide - EPS && rh >= minSide - EPS) {
-        nx.push(x2); ny.push(ry); nw.push(rx2 - x2); nh.push(rh);
+      if (x2 < rx2 - EPS && rx2 - x2 >= minSide && rh >= minSide) {
+        f[m] = x2; f[m + 1] = ry; f[m + 2] = rx2 - x2; f[m + 3] = rh; m += 4;
       }
-      if (y > ry + EPS && y - ry >= minSide - EPS && rw >= minSide - EPS) {
-        nx.push(rx); ny.push(ry); nw.push(rw); nh.push(y - ry);
+      if (y > ry + EPS && y - ry >= minSide && rw >= minSide) {
+        f[m] = rx; f[m + 1] = ry; f[m + 2] = rw; f[m + 3] = y - ry; m += 4;
       }
-      if (y2 < ry2 - EPS && ry2 - y2 >= minSide - EPS && rw >= minSide - EPS) {
-        nx.push(rx); ny.push(y2); nw.push(rw); nh.push(ry2 - y2);
+      if (y2 < ry2 - EPS && ry2 - y2 >= minSide && rw >= minSide) {
+        f[m] = rx; f[m + 1] = y2; f[m + 2] = rw; f[m + 3] = ry2 - y2; m += 4;
       }
     }
-    fx.length = keep;
-    fy.length = keep;
-    fw.length = keep;
-    fh.length = keep;
+    this.count = keep;
     // Keep a new rectangle only if no other rectangle contains it. Old rectangles were maximal, so
     // none of them can lie inside a new one (a new one lies inside a removed old one).
-    const m = nx.length;
-    for (let i = 0; i < m; i++) {
-      const ax = nx[i]!;
-      const ay = ny[i]!;
-      const ax2 = ax + nw[i]!;
-      const ay2 = ay + nh[i]!;
+    for (let a = 0; a < m; a += 4) {
+      const ax = f[a]!;
+      const ay = f[a + 1]!;
+      const ax2 = ax + f[a + 2]!;
+      const ay2 = ay + f[a + 3]!;
       let contained = false;
       for (let j = 0; j < keep; j++) {
-        if (ax >= fx[j]! - EPS && ay >= fy[j]! - EPS && ax2 <= fx[j]! + fw[j]! + EPS && ay2 <= fy[j]! + fh[j]! + EPS) {
+        const o = 4 * j;
+        if (ax >= r[o]! - EPS && ay >= r[o + 1]! - EPS && ax2 <= r[o]! + r[o + 2]! + EPS && ay2 <= r[o + 1]! + r[o + 3]! + EPS) {
           contained = true;
           break;
         }
       }
       if (!contained) {
-        for (let j = 0; j < m; j++) {
-          if (j === i || nw[j]! < 0) continue;
-          const bx = nx[j]!;
-          const by = ny[j]!;
-          const bx2 = bx + nw[j]!;
-          const by2 = by + nh[j]!;
+        for (let b = 0; b < m; b += 4) {
+          if (b === a || f[b + 2]! < 0) continue;
+          const bx = f[b]!;
+          const by = f[b + 1]!;
+          const bx2 = bx + f[b + 2]!;
+          const by2 = by + f[b + 3]!;
           if (ax >= bx - EPS && ay >= by - EPS && ax2 <= bx2 + EPS && ay2 <= by2 + EPS) {
             // Equal rectangles: keep the later one only.
             const equal = ax <= bx + EPS && ay <= by + EPS && ax2 >= bx2 - EPS && ay2 >= by2 - EPS;
-            if (!equal || j > i) {
+            if (!equal || b > a) {
               contained = true;
               break;
             }
           }
         }
       }
-      if (contained) nw[i] = -1;
+      if (contained) f[a + 2] = -1;
     }
-    for (let i = 0; i < m; i++) {
-      if (nw[i]! < 0) continue;
-      fx.push(nx[i]!);
-      fy.push(ny[i]!);
-      fw.push(nw[i]!);
-      fh.push(nh[i]!);
+    for (let a = 0; a < m; a += 4) {
+      if (f[a + 2]! < 0) continue;
+      this.push(f[a]!, f[a + 1]!, f[a + 2]!, f[a + 3]!);
     }
   }
 }
@@ -292,20 +291,18 @@ export class GuillotineBin extends BaseBin {
   place(cand: Candidate, item: number): void {
     this.record(cand, item);
     const i = cand.free;
-    const { fx, fy, fw, fh } = this;
-    const rx = fx[i]!;
-    const ry = fy[i]!;
-    const rw = fw[i]!;
-    const rh = fh[i]!;
-    const last = fx.length - 1;
-    fx[i] = fx[last]!;
-    fy[i] = fy[last]!;
-    fw[i] = fw[last]!;
-    fh[i] = fh[last]!;
-    fx.length = last;
-    fy.length = last;
-    fw.length = last;
-    fh.length = last;
+    const r = this.r;
+    const o = 4 * i;
+    const rx = r[o]!;
+    const ry = r[o + 1]!;
+    const rw = r[o + 2]!;
+    const rh = r[o + 3]!;
+    const last = 4 * (this.count - 1);
+    r[o] = r[last]!;
+    r[o + 1] = r[last + 1]!;
+    r[o + 2] = r[last + 2]!;
+    r[o + 3] = r[last + 3]!;
+    this.count--;
     const w = cand.w;
     const h = cand.h;
     const lw = rw - w;
@@ -337,12 +334,8 @@ export class GuillotineBin extends BaseBin {
     const topW = horizontal ? rw : w;
     const topH = lh;
     const m = this.minSide - EPS;
-    if (rightW >= m && rightH >= m && rightW > EPS) {
-      fx.push(rx + w); fy.push(ry); fw.push(rightW); fh.push(rightH);
-    }
-    if (topW >= m && topH >= m && topH > EPS) {
-      fx.push(rx); fy.push(ry + h); fw.push(topW); fh.push(topH);
-    }
+    if (rightW >= m && rightH >= m && rightW > EPS) this.push(rx + w, ry, rightW, rightH);
+    if (topW >= m && topH >= m && topH > EPS) this.push(rx, ry + h, topW, topH);
   }
 }
 

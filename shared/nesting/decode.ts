@@ -3,7 +3,12 @@
  * (first bin that fits, or best over all bins), opening new bins when allowed.
  */
 import { Candidate, makeBin, type PackBin } from './bins.js';
-import { ORIENT_AS_GIVEN, ORIENT_TURNED, type Problem } from './problem.js';
+import { work } from './budget.js';
+import type { Problem } from './problem.js';
+
+// Local copies of ORIENT_AS_GIVEN / ORIENT_TURNED (problem.ts): hot loop, no module indirection.
+const AS_GIVEN = 1;
+const TURNED = 2;
 
 export interface DecodeOptions {
   rule: number;
@@ -37,8 +42,10 @@ export function decode(
 ): Packing {
   const bins: PackBin[] = [];
   const binTypes: number[] = [];
+  work.n += 300;
   const newBin = (t: number) => {
     const type = pr.types[t]!;
+    work.n += 20;
     bins.push(makeBin(pr.guillotine, type.W, heightOverride ?? type.H, pr.minSide, opts.split));
     binTypes.push(t);
   };
@@ -50,14 +57,15 @@ export function decode(
   for (let k = 0; k < order.length; k++) {
     const i = order[k]!;
     const it = pr.items[i]!;
+    work.n += 4;
     cand.reset();
     for (let b = 0; b < bins.length; b++) {
       const o = pr.orient[binTypes[b]!]![i]!;
-      if (o & ORIENT_AS_GIVEN) bins[b]!.consider(it.w, it.h, false, rule, cand, b);
-      if (o & ORIENT_TURNED) bins[b]!.consider(it.h, it.w, true, rule, cand, b);
-      if (!bestFit && cand.found) break;
+      if (o & AS_GIVEN) bins[b]!.consider(it.w, it.h, false, rule, cand, b);
+      if (o & TURNED) bins[b]!.consider(it.h, it.w, true, rule, cand, b);
+      if (!bestFit && cand.free >= 0) break;
     }
-    if (!cand.found && !fixed) {
+    if (cand.free < 0 && !fixed) {
       for (let t = 0; t < pr.types.length; t++) {
         if (avail[t]! <= 0) continue;
         const o = pr.orient[t]![i]!;
@@ -65,12 +73,12 @@ export function decode(
         avail[t]!--;
         newBin(t);
         const b = bins.length - 1;
-        if (o & ORIENT_AS_GIVEN) bins[b]!.consider(it.w, it.h, false, rule, cand, b);
-        if (o & ORIENT_TURNED) bins[b]!.consider(it.h, it.w, true, rule, cand, b);
+        if (o & AS_GIVEN) bins[b]!.consider(it.w, it.h, false, rule, cand, b);
+        if (o & TURNED) bins[b]!.consider(it.h, it.w, true, rule, cand, b);
         break;
       }
     }
-    if (cand.found) bins[cand.bin]!.place(cand, i);
+    if (cand.free >= 0) bins[cand.bin]!.place(cand, i);
     else {
       leftover.push(i);
       leftoverArea += it.area;

@@ -26,6 +26,15 @@ import { decode, type DecodeOptions, type Packing } from './decode.js';
 import type { Problem } from './problem.js';
 import { randomInt, type Rng } from './rng.js';
 
+/** Search knobs (defaults chosen by measurement on the bench; see DEVELOPERS.md). */
+export const tuning = {
+  fixedBestFit: false,
+  startFromBest: false,
+  restartFactor: 4,
+  lahc: 0,
+  randomRestart: false,
+};
+
 export interface SearchContext {
   rng: Rng;
   budget: Budget;
@@ -171,32 +180,42 @@ export function packIntoFixed(
   let sinceRestart = 0;
   const rules = ruleSet(pr);
   let o = { ...opts };
+  // Late acceptance (Burke & Bykov): accept a step no worse than the cost `lahc` steps ago.
+  const hist = tuning.lahc > 0 ? new Float64Array(tuning.lahc).fill(cur.leftoverArea) : null;
+  let iter = 0;
   while (!budget.expired()) {
     const next = seq.slice();
     mutate(rng, next, cur.leftover);
     const p = decode(pr, next, o, fixed, undefined, heightOverride);
     if (p.leftover.length === 0) return p;
-    if (p.leftoverArea <= cur.leftoverArea + 1e-9) {
+    iter++;
+    const ok = p.leftoverArea <= cur.leftoverArea + 1e-9 || (hist !== null && p.leftoverArea <= hist[iter % hist.length]! + 1e-9);
+    if (ok) {
       seq = next;
       cur = p;
-      if (p.leftoverArea < bestCost - 1e-9) {
-        bestCost = p.leftoverArea;
-        bestSeq = seq.slice();
-        stale = 0;
-        sinceRestart = 0;
-        continue;
-      }
+    }
+    if (hist) hist[iter % hist.length] = cur.leftoverArea;
+    if (ok && p.leftoverArea < bestCost - 1e-9) {
+      bestCost = p.leftoverArea;
+      bestSeq = seq.slice();
+      stale = 0;
+      sinceRestart = 0;
+      continue;
     }
     stale++;
     sinceRestart++;
     if (stale > maxStale) return null;
-    if (sinceRestart > 50 + 4 * pr.items.length) {
-      // Restart from the best ordering with another placement rule.
+    if (sinceRestart > 50 + tuning.restartFactor * pr.items.length) {
+      // Restart from the best ordering (or a shuffled one) with another placement rule.
       sinceRestart = 0;
-      seq = bestSeq.slice();
+      if (tuning.randomRestart) {
+        seq = bestSeq.slice();
+        for (let k = 0; k < seq.length / 4; k++) mutate(rng, seq, []);
+      } else seq = bestSeq.slice();
       o = { ...o, rule: rules[randomInt(rng, rules.length)]! };
       cur = decode(pr, seq, o, fixed, undefined, heightOverride);
       if (cur.leftover.length === 0) return cur;
+      if (hist) hist.fill(cur.leftoverArea);
     }
   }
   return null;
@@ -241,7 +260,16 @@ export function solveBins(pr: Problem, ctx: SearchContext): Packing {
     });
     if (weakest < 0) break;
     const target = cur.binTypes.filter((_, b) => b !== weakest);
-    const found = packIntoFixed(pr, target, orders[0]!, bestOpts, ctx);
+    let start = orders[0]!;
+    if (tuning.startFromBest) {
+      // Items of the weakest sheet first, then the others sheet by sheet.
+      const seq: number[] = cur.bins[weakest]!.placements.map((p) => p.item);
+      cur.bins.forEach((bin, b) => {
+        if (b !== weakest) for (const p of bin.placements) seq.push(p.item);
+      });
+      start = Int32Array.from(seq);
+    }
+    const found = packIntoFixed(pr, target, start, { ...bestOpts, bestFit: tuning.fixedBestFit }, ctx);
     if (!found) break;
     cur = compact(found);
     ctx.onImprove?.(primaryOf(pr, cur));
@@ -274,9 +302,11 @@ export function solveStrip(pr: Problem, t: number, ctx: SearchContext): Packing 
   let best: Packing | null = null;
   let bestLen = Infinity;
   let bestOpts: DecodeOptions = { rule: RULE_BL, split: SPLIT_SHORTER_LEFTOVER, bestFit: false };
-  const rules = [RULE_BL, RULE_CP, RULE_BSSF, RULE_BAF];
+  // Contact point would reward touching the far end of the open roll: only used at a fixed length.
+  const rules = pr.items.length <= 300 ? [RULE_BL, RULE_CP, RULE_BSSF, RULE_BAF] : [RULE_BL, RULE_BSSF, RULE_BAF];
   outer: for (const order of orders) {
     for (const rule of rules) {
+      if (rule === RULE_CP) continue;
       for (const split of splitSet(pr)) {
         const opts = { rule, split, bestFit: false };
         const p = decode(pr, order, opts, [t], undefined, open);
