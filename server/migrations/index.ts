@@ -3,6 +3,7 @@ import { Migration20261201215411 } from './Migration20261201215411.js';
 import { Migration20261201221145 } from './Migration20261201221145.js';
 import { Migration20261201222028 } from './Migration20261201222028.js';
 import { Migration20261201222500 } from './Migration20261201222500.js';
+import { Migration20261201223100 } from './Migration20261201223100.js';
 
 /**
  * Every migration, oldest first. `npm run orm -- migration:create` writes a new file here; add it to this list
@@ -13,4 +14,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201221145', class: Migration20261201221145 },
   { name: 'Migration20261201222028', class: Migration20261201222028 },
   { name: 'Migration20261201222500', class: Migration20261201222500 },
+  { name: 'Migration20261201223100', class: Migration20261201223100 },
 ];
