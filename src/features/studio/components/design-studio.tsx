@@ -140,10 +140,13 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
     return m;
   }, [figures]);
 
-  // Keys: anywhere on the page except while typing in a field or a dialog.
+  // Keys: when the studio has the focus (or nothing does), never while typing in a field or a dialog.
+  const rootRef = useRef<HTMLDivElement>(null);
   useEffect(() => {
     const down = (e: KeyboardEvent) => {
       if (isTyping(e.target) || tab !== 'drawing') return;
+      const inStudio = e.target === document.body || (e.target instanceof Node && !!rootRef.current?.contains(e.target));
+      if (!inStudio) return;
       if (editor.keyDown(e)) e.preventDefault();
     };
     const up = (e: KeyboardEvent) => editor.keyUp(e);
@@ -168,6 +171,7 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
 
   return (
     <div
+      ref={rootRef}
       className={`flex flex-col overflow-hidden rounded-lg border border-zinc-200 bg-white ${className ?? 'h-[clamp(500px,calc(100vh-10rem),760px)]'}`}
       data-testid="design-studio"
       data-readonly={readOnly || undefined}
@@ -219,6 +223,7 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
           )}
           {tab === 'drawing' && (
             <>
+              {!readOnly && (
               <label className="flex items-center gap-1 text-[12px] text-zinc-500">
                 Snap
                 <select
@@ -234,6 +239,7 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
                   ))}
                 </select>
               </label>
+              )}
               <ToolButton onClick={() => setFitRequest((n) => n + 1)} title="Fit the drawings to the window">
                 Fit
               </ToolButton>

@@ -130,7 +130,7 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
         <label className="grid grid-cols-[1fr_7.5rem] items-center gap-2 text-[13px]">
           <span className="text-zinc-600">Face</span>
           <select
-            className="h-7 rounded border border-zinc-300 bg-white px-1 text-[12.5px] disabled:bg-zinc-50"
+            className="h-7 rounded border border-zinc-300 bg-white px-1 text-[12.5px] disabled:bg-zinc-50 disabled:text-zinc-500"
             value={o.face}
             disabled={readOnly}
             onChange={(e) => editor.setOpeningFace(i, e.target.value as Face)}
@@ -266,7 +266,7 @@ function AxisSelect({ value, onChange, readOnly, label }: { value: Axis; onChang
     <label className="grid grid-cols-[1fr_7.5rem] items-center gap-2 text-[13px]">
       <span className="text-zinc-600">{label}</span>
       <select
-        className="h-7 rounded border border-zinc-300 bg-white px-1 text-[12.5px] disabled:bg-zinc-50"
+        className="h-7 rounded border border-zinc-300 bg-white px-1 text-[12.5px] disabled:bg-zinc-50 disabled:text-zinc-500"
         value={value}
         disabled={readOnly}
         onChange={(e) => onChange(e.target.value as Axis)}
