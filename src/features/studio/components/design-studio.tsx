@@ -224,21 +224,21 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
           {tab === 'drawing' && (
             <>
               {!readOnly && (
-              <label className="flex items-center gap-1 text-[12px] text-zinc-500">
-                Snap
-                <select
-                  className="h-7 rounded border border-zinc-300 bg-white px-1 text-[12.5px] text-zinc-800"
-                  value={state.grid}
-                  onChange={(e) => editor.setGrid(e.target.value as GridId)}
-                  aria-label="Snap grid"
-                >
-                  {GRIDS.map((g) => (
-                    <option key={g.id} value={g.id}>
-                      {g.label}
-                    </option>
-                  ))}
-                </select>
-              </label>
+                <label className="flex items-center gap-1 text-[12px] text-zinc-500">
+                  Snap
+                  <select
+                    className="h-7 rounded border border-zinc-300 bg-white px-1 text-[12.5px] text-zinc-800"
+                    value={state.grid}
+                    onChange={(e) => editor.setGrid(e.target.value as GridId)}
+                    aria-label="Snap grid"
+                  >
+                    {GRIDS.map((g) => (
+                      <option key={g.id} value={g.id}>
+                        {g.label}
+                      </option>
+                    ))}
+                  </select>
+                </label>
               )}
               <ToolButton onClick={() => setFitRequest((n) => n + 1)} title="Fit the drawings to the window">
                 Fit
