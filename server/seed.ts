@@ -3,6 +3,7 @@ import { ROLES, type Role } from '../shared/schemas/api.schema.js';
 import type { Orm } from './db.js';
 import { hashPassword } from './modules/auth/password.js';
 import { User } from './modules/auth/user.entity.js';
+import { BuildsService } from './modules/builds/builds.service.js';
 import { DesignsService } from './modules/designs/designs.service.js';
 import { StockService } from './modules/stock/stock.service.js';
 import { Membership } from './modules/workshops/membership.entity.js';
@@ -11,6 +12,7 @@ import { Workshop } from './modules/workshops/workshop.entity.js';
 /** The invented demo of PRODUCT.md §9. Printed by `npm start`; never seeded when NODE_ENV=production. */
 export const DEMO_WORKSHOP = 'Harbour Lane Audio';
 export const DEMO_PASSWORD = 'boxwright-demo';
+export const DEMO_BUILD_NAME = 'Harbour Lane pair + floorstanders';
 export const DEMO_EMAILS = {
   owner: 'owner@harbourlane.test',
   designer: 'designer@harbourlane.test',
@@ -49,9 +51,22 @@ export async function seedDemo(orm: Orm): Promise<boolean> {
     await em.flush();
     // Through the service, so the demo designs pass the same checks as a user's save.
     const designs = new DesignsService(em);
-    for (const design of [DEMO_BOOKSHELF, DEMO_FLOORSTANDER]) await designs.create(workshop.id, design, DEMO_EMAILS.designer);
+    const designIds: number[] = [];
+    for (const design of [DEMO_BOOKSHELF, DEMO_FLOORSTANDER]) designIds.push((await designs.create(workshop.id, design, DEMO_EMAILS.designer)).id);
     const stock = new StockService(em);
     for (const item of DEMO_STOCK) await stock.create(workshop.id, item, DEMO_EMAILS.maker);
+    // The demo build: the bookshelf pair (mirror images) and four floorstanders.
+    await new BuildsService(em).create(
+      workshop.id,
+      {
+        name: DEMO_BUILD_NAME,
+        items: [
+          { designId: designIds[0]!, quantity: 2, mirroredPair: true },
+          { designId: designIds[1]!, quantity: 4, mirroredPair: false },
+        ],
+      },
+      DEMO_EMAILS.designer,
+    );
     return true;
   });
 }

@@ -37,7 +37,7 @@ export function buildRoutes(builds: BuildsService, lookup: RoleLookup): Router {
   });
 
   router.delete('/:id', edit, async (req, res) => {
-    await builds.remove(accessOf(res).workshopId, idParam(req, 'id'));
+    await builds.remove(accessOf(res).workshopId, idParam(req, 'id'), userOf(req).email);
     res.status(204).end();
   });
 

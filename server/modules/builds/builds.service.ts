@@ -1,9 +1,15 @@
 import { LockMode, type EntityManager } from '@mikro-orm/sqlite';
 import { buildInput, type BuildDto, type BuildValues } from '../../../shared/schemas/api.schema.js';
 import { AppError } from '../../errors.js';
+import { recordAudit } from '../audit/audit.service.js';
 import { CutPlan } from '../cut-plans/cut-plan.entity.js';
 import { Design } from '../designs/design.entity.js';
 import { Build } from './build.entity.js';
+
+function describeItems(values: BuildValues): string {
+  const cabinets = values.items.reduce((n, i) => n + i.quantity, 0);
+  return `${values.items.length} design${values.items.length === 1 ? '' : 's'}, ${cabinets} cabinet${cabinets === 1 ? '' : 's'}`;
+}
 
 /** Builds of one workshop. Every method takes the workshop id the route checked, so ids never cross workshops. */
 export class BuildsService {
@@ -21,9 +27,13 @@ export class BuildsService {
 
   async create(workshopId: number, input: unknown, byEmail: string): Promise<BuildDto> {
     const values = await this.checked(workshopId, input);
-    const build = this.em.create(Build, { workshop: workshopId, name: values.name, notes: values.notes, items: values.items, updatedBy: byEmail });
-    await this.em.flush();
-    return this.get(workshopId, build.id);
+    const id = await this.em.transactional(async (em) => {
+      const build = em.create(Build, { workshop: workshopId, name: values.name, notes: values.notes, items: values.items, updatedBy: byEmail });
+      await em.flush();
+      recordAudit(em, { workshopId, subjectType: 'build', subjectId: build.id, action: 'create', summary: `Created build "${values.name}" (${describeItems(values)})`, actorEmail: byEmail });
+      return build.id;
+    });
+    return this.get(workshopId, id);
   }
 
   /** Saves a new version; a stale `version` throws OptimisticLockError → 409. */
@@ -34,16 +44,19 @@ export class BuildsService {
     build.notes = values.notes;
     build.items = values.items;
     build.updatedBy = byEmail;
+    recordAudit(this.em, { workshopId, subjectType: 'build', subjectId: id, action: 'update', summary: `Saved build "${values.name}" (${describeItems(values)})`, actorEmail: byEmail });
     await this.em.flush();
     return this.get(workshopId, id);
   }
 
   /** Deletes the build and its cut plans. */
-  async remove(workshopId: number, id: number): Promise<void> {
-    const build = await this.find(workshopId, id);
-    await this.em.nativeDelete(CutPlan, { build: build.id, workshop: workshopId });
-    this.em.remove(build);
-    await this.em.flush();
+  async remove(workshopId: number, id: number, byEmail: string): Promise<void> {
+    await this.em.transactional(async (em) => {
+      const build = await em.findOneOrFail(Build, { id, workshop: workshopId });
+      await em.nativeDelete(CutPlan, { build: build.id, workshop: workshopId });
+      recordAudit(em, { workshopId, subjectType: 'build', subjectId: id, action: 'delete', summary: `Deleted build "${build.name}" and its cut plans`, actorEmail: byEmail });
+      em.remove(build);
+    });
   }
 
   find(workshopId: number, id: number): Promise<Build> {

@@ -229,7 +229,9 @@ export function groupJobs(parts: readonly CutPlanPartDto[], stock: readonly CutP
   }
   const total = parts.reduce((n, p) => n + p.quantity, 0);
   const out: PreparedGroup[] = [];
-  for (const [key, g] of groups) {
+  // Panels first (by material, then thickness), then lining.
+  const ordered = [...groups].sort(([, a], [, b]) => Number(a.kind === 'lining') - Number(b.kind === 'lining') || a.material.localeCompare(b.material) || a.thicknessMm - b.thicknessMm);
+  for (const [key, g] of ordered) {
     const offered = stock.filter((s) =>
       g.kind === 'lining' ? s.kind === 'roll' && sameThickness(s.thicknessMm, g.thicknessMm) : s.kind !== 'roll' && sameMaterial(s.material, g.material) && sameThickness(s.thicknessMm, g.thicknessMm),
     );

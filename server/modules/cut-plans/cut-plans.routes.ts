@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { AppError } from '../../errors.js';
-import { accessOf, idParam, requireRole, requireUser, type RoleLookup } from '../../middleware/auth.js';
+import { accessOf, idParam, requireRole, requireUser, userOf, type RoleLookup } from '../../middleware/auth.js';
 import type { CutPlansService } from './cut-plans.service.js';
 
 /** `/api/workshops/:wid/cut-plans` — every member reads (viewers included); those who run cut plans delete them. */
@@ -25,7 +25,7 @@ export function cutPlanRoutes(cutPlans: CutPlansService, lookup: RoleLookup): Ro
   });
 
   router.delete('/:id', run, async (req, res) => {
-    await cutPlans.remove(accessOf(res).workshopId, idParam(req, 'id'));
+    await cutPlans.remove(accessOf(res).workshopId, idParam(req, 'id'), userOf(req).email);
     res.status(204).end();
   });
 

@@ -11,6 +11,7 @@ import {
 } from '../../../shared/schemas/api.schema.js';
 import type { Layout } from '../../../shared/schemas/nest.schema.js';
 import { AppError } from '../../errors.js';
+import { recordAudit } from '../audit/audit.service.js';
 import { Build } from '../builds/build.entity.js';
 import { Design } from '../designs/design.entity.js';
 import { StockService } from '../stock/stock.service.js';
@@ -140,6 +141,11 @@ export class CutPlansService {
       createdBy: byEmail,
     });
     await em.flush();
+    const t = plan.totals;
+    const summary = `Made a cut plan for "${prepared.buildName}": ${t.sheetsUsed} sheet${t.sheetsUsed === 1 ? '' : 's'}${t.rollLengthMm > 0 ? `, ${(t.rollLengthMm / 1000).toFixed(2)} m of lining roll` : ''}${t.partsUnplaced ? `, ${t.partsUnplaced} parts not placed` : ''}`;
+    recordAudit(em, { workshopId: prepared.workshopId, subjectType: 'plan', subjectId: plan.id, action: 'create', summary, actorEmail: byEmail });
+    recordAudit(em, { workshopId: prepared.workshopId, subjectType: 'build', subjectId: prepared.buildId, action: 'plan', summary: `${summary} (plan ${plan.id})`, actorEmail: byEmail });
+    await em.flush();
     return { id: plan.id, layouts: all };
   }
 
@@ -153,8 +159,10 @@ export class CutPlansService {
     return toDto(await this.em.findOneOrFail(CutPlan, { id, workshop: workshopId }, { exclude: ['exportCabinets'] }));
   }
 
-  async remove(workshopId: number, id: number): Promise<void> {
-    const plan = await this.em.findOneOrFail(CutPlan, { id, workshop: workshopId });
+  async remove(workshopId: number, id: number, byEmail: string): Promise<void> {
+    const plan = await this.em.findOneOrFail(CutPlan, { id, workshop: workshopId }, { exclude: ['exportCabinets'] });
+    recordAudit(this.em, { workshopId, subjectType: 'plan', subjectId: id, action: 'delete', summary: `Deleted cut plan ${id} of "${plan.buildName}"`, actorEmail: byEmail });
+    recordAudit(this.em, { workshopId, subjectType: 'build', subjectId: plan.build.id, action: 'delete-plan', summary: `Deleted cut plan ${id}`, actorEmail: byEmail });
     this.em.remove(plan);
     await this.em.flush();
   }
