@@ -3,7 +3,8 @@ import { planDesign } from '../../../shared/cabinet/index';
 import { diffDesigns } from '../../../src/features/studio/model/diff';
 import { EMPTY_FIGURES, nextFigures, type PlanOutcome } from '../../../src/features/studio/model/figures';
 import { formatLength, parseLength } from '../../../src/features/studio/model/units';
-import { bookshelf } from './fixtures';
+import { StudioEditor } from '../../../src/features/studio/model/editor';
+import { bookshelf, floorstander } from './fixtures';
 
 describe('lengths typed in the studio accept either unit', () => {
   // 1 in = 25.4 mm exactly (International Yard and Pound Agreement, 1959; REFERENCES.md §8).
@@ -59,6 +60,23 @@ describe('live figures', () => {
     const r = planDesign(doc) as PlanOutcome;
     const f = nextFigures(EMPTY_FIGURES, doc, r).figures!;
     expect(f.port!.airSpeedLimitMs).toBeCloseTo(0.05 * (r.ok ? r.plan.port!.speedOfSoundMs! : 0), 9);
+  });
+});
+
+describe('one-click port length', () => {
+  it.each([
+    ['bookshelf', bookshelf],
+    ['floorstander', floorstander],
+  ] as const)('applying the length for the target tunes the %s to its target (0.1 mm rounding: within 0.02 Hz)', (_name, make) => {
+    const ed = new StudioEditor(make());
+    const r = planDesign(ed.doc) as PlanOutcome;
+    const f = nextFigures(EMPTY_FIGURES, ed.doc, r).figures!;
+    expect(ed.applyPortLength(f.port!.portIndexes, f.port!.lengthForTargetMm!)).toBe(true);
+    expect(ed.getState().history.undo).toHaveLength(1);
+    const after = planDesign(ed.doc) as PlanOutcome;
+    expect(after.ok).toBe(true);
+    const port = after.ok ? after.plan.port! : null;
+    expect(Math.abs(port!.tuningHz - f.port!.targetHz!)).toBeLessThan(0.02);
   });
 });
 
