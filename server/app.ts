@@ -35,6 +35,10 @@ import { StockService } from './modules/stock/stock.service.js';
 import { uploadRoutes } from './modules/uploads/uploads.routes.js';
 import { UploadsService } from './modules/uploads/uploads.service.js';
 import { MemoryStorage, type FileStorage } from './storage/storage.js';
+import { checklistRoutes } from './modules/checklist/checklist.routes.js';
+import { ChecklistService } from './modules/checklist/checklist.service.js';
+import { shareLinkAdminRoutes, sharedPlanRoutes } from './modules/share-links/share-links.routes.js';
+import { ShareLinksService } from './modules/share-links/share-links.service.js';
 import './session-user.js';
 
 export const SESSION_COOKIE = 'boxwright.sid';
@@ -85,6 +89,8 @@ export function createApp(deps: AppDeps): Express {
   const uploads = new UploadsService(orm.em, deps.storage ?? new MemoryStorage(), stock);
   const invitations = new InvitationsService(orm.em, mail, publicUrl);
   const resets = new PasswordResetService(orm.em, mail, publicUrl, logger);
+  const checklist = new ChecklistService(orm.em, stock);
+  const shareLinks = new ShareLinksService(orm.em, cutPlans, mail, publicUrl);
   const passport = createPassport(auth);
   const roleLookup = workshops.roleOf.bind(workshops);
 
@@ -116,6 +122,9 @@ export function createApp(deps: AppDeps): Express {
   api.use('/workshops/:wid/designs', designRoutes(designs, roleLookup));
   api.use('/workshops/:wid/builds', buildRoutes(builds, roleLookup));
   api.use('/workshops/:wid/nest-jobs', nestJobRoutes(nestJobs, roleLookup));
+  api.use('/workshops/:wid/cut-plans/:planId/checklist', checklistRoutes(checklist, roleLookup));
+  api.use('/workshops/:wid/cut-plans/:planId/share-links', shareLinkAdminRoutes(shareLinks, roleLookup));
+  api.use('/share', sharedPlanRoutes(shareLinks));
   api.use('/workshops/:wid/cut-plans/:id/exports', exportRoutes(cutPlans, roleLookup));
   api.use('/workshops/:wid/cut-plans', cutPlanRoutes(cutPlans, roleLookup));
   api.use('/workshops/:wid/stock', stockRoutes(stock, uploads, roleLookup));

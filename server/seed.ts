@@ -23,11 +23,13 @@ export const DEMO_PEOPLE: ReadonlyArray<{ email: string; role: Role }> = ROLES.m
 
 /**
  * The demo stock room (PRODUCT.md §9): 18 mm MDF sheets of 2440 × 1220 mm (MDF has no grain), one kept
- * offcut, and 50 mm polyester batt on a 1200 mm roll. Prices are invented.
+ * offcut, 25 mm MDF for the floorstanders' baffles, and 50 mm polyester batt on a 1200 mm roll. Prices are invented.
  */
 export const DEMO_STOCK = [
   { kind: 'sheet', material: 'MDF', thicknessMm: 18, widthMm: 2440, heightMm: 1220, quantity: 12, cost: 38.5, grain: 'none', note: 'demo' },
   { kind: 'remnant', material: 'MDF', thicknessMm: 18, widthMm: 1220, heightMm: 610, quantity: 1, cost: 0, grain: 'none', note: 'kept offcut' },
+  // The floorstanders' baffles are 25 mm (a thicker front), so a few 25 mm sheets too.
+  { kind: 'sheet', material: 'MDF', thicknessMm: 25, widthMm: 2440, heightMm: 1220, quantity: 3, cost: 52, grain: 'none', note: 'for baffles' },
   { kind: 'roll', material: 'Polyester batt', thicknessMm: 50, widthMm: 1200, lengthMm: 12000, quantity: 1, cost: 6.2, grain: 'none', note: 'cost per metre' },
 ] as const;
 

@@ -473,3 +473,101 @@ export interface DriverParamsDto {
   /** Xmax, one way, mm. */
   excursionMm: number;
 }
+
+// ─── Build checklist (cut parts and sheets) ─────────────────────────────────────────────────────
+export interface ChecklistMarkDto {
+  by: string;
+  at: string;
+}
+/** One piece to cut: part `partId`, piece `n` of `of`. */
+export interface ChecklistPartDto {
+  key: string;
+  partId: string;
+  n: number;
+  of: number;
+  kind: 'panel' | 'lining';
+  name: string;
+  cabinet: string;
+  widthMm: number;
+  heightMm: number;
+  thicknessMm: number;
+  material: string;
+  cut: ChecklistMarkDto | null;
+}
+/** One sheet, remnant or roll length of the plan; marking it cut takes it from stock and keeps its offcuts. */
+export interface ChecklistSheetDto {
+  key: string;
+  groupLabel: string;
+  /** 1-based within its group. */
+  index: number;
+  stockKind: StockKind;
+  widthMm: number;
+  /** On a roll: the length used. */
+  heightMm: number;
+  partCount: number;
+  /** Offcuts that become remnants when the sheet is marked cut. */
+  offcuts: { widthMm: number; heightMm: number }[];
+  /** Whether it comes from the stock room (else typed in: nothing to deduct). */
+  fromStockRoom: boolean;
+  cut: ChecklistMarkDto | null;
+}
+export interface ChecklistProgressDto {
+  label: string;
+  done: number;
+  total: number;
+}
+export interface ChecklistDto {
+  planId: number;
+  buildName: string;
+  parts: ChecklistPartDto[];
+  sheets: ChecklistSheetDto[];
+  /** Pieces cut per cabinet design, and in total. */
+  cabinets: ChecklistProgressDto[];
+  total: ChecklistProgressDto;
+  sheetsProgress: ChecklistProgressDto;
+}
+export const checklistTickInput = z.object({
+  item: z.enum(['part', 'sheet'], { error: 'item must be part or sheet' }),
+  key: z.string({ error: 'key is required' }).min(1, 'key is required').max(300),
+  cut: z.boolean({ error: 'cut must be true or false' }),
+});
+export type ChecklistTickInput = z.input<typeof checklistTickInput>;
+
+// ─── Share links ────────────────────────────────────────────────────────────────────────────────
+export const shareLinkInput = z.object({
+  /** How long the link works: 1 to 90 days (default 14). */
+  days: z.number({ error: 'days must be a whole number' }).int('days must be a whole number').min(1, 'at least 1 day').max(90, 'at most 90 days').default(14),
+  /** Send the link to this address ("send this cut plan"). */
+  email: emailSchema.optional(),
+  message: z.string().trim().max(500, 'the note must be at most 500 characters').optional(),
+});
+export type ShareLinkInput = z.input<typeof shareLinkInput>;
+export interface ShareLinkDto {
+  id: number;
+  planId: number;
+  status: 'active' | 'expired' | 'revoked';
+  expiresAt: string;
+  sentTo: string | null;
+  createdBy: string;
+  createdAt: string;
+  lastOpenedAt: string | null;
+  openCount: number;
+  /** Only in the answer that created it: the link itself (never stored). */
+  url?: string;
+  mailSent?: boolean;
+}
+/** What a share link shows: one cut plan, read-only, without the workshop's people or stock-room ids. */
+export interface SharedPlanDto {
+  buildName: string;
+  createdAt: string;
+  expiresAt: string;
+  mode: CutMode;
+  settings: Pick<CutPlanSettings, 'kerfMm' | 'trimMm' | 'mode' | 'minOffcutMm'>;
+  totals: CutPlanTotalsDto;
+  cabinets: CutPlanCabinetDto[];
+  parts: CutPlanPartDto[];
+  groups: CutPlanGroupDto[];
+  warnings: { code: string; message: string }[];
+  /** Export file names under /api/share/:token/exports/. */
+  exports: string[];
+}

@@ -153,34 +153,69 @@ export class StockService {
   }
 
   /**
-   * Takes `count` pieces of a sheet or remnant out of stock (a sheet marked cut). Unlimited stock stays
-   * unlimited; a remnant used up is removed. Runs in the caller's transaction when given its em.
-   * Returns the quantity left (null = unlimited).
+   * Takes a cut sheet out of stock: one piece of a sheet or remnant (a remnant used up is removed), or
+   * `lengthMm` off a roll. Unlimited stock stays unlimited. Runs in the caller's transaction (its `em`).
+   * Returns what was taken (pieces or mm; 0 for unlimited), or null when the item is no longer in the room.
    */
-  async deduct(workshopId: number, id: number, count: number, byEmail: string, reason: string, em: EntityManager = this.em): Promise<number | null> {
+  async takeCut(workshopId: number, id: number, lengthMm: number, byEmail: string, reason: string, em: EntityManager = this.em): Promise<number | null> {
     const item = await em.findOne(StockItem, { id, workshop: workshopId });
-    if (!item) throw AppError.invalid(`Stock item ${id} is no longer in the stock room.`, { stockId: 'not in the stock room' });
-    if (item.quantity === null || item.quantity === undefined) {
-      recordAudit(em, { workshopId, subjectType: 'stock', subjectId: id, action: 'cut', summary: `${reason} (unlimited stock)`, actorEmail: byEmail });
-      return null;
+    if (!item) return null;
+    const audit = (summary: string) => recordAudit(em, { workshopId, subjectType: 'stock', subjectId: id, action: 'cut', summary, actorEmail: byEmail });
+    if (item.kind === 'roll') {
+      if (item.lengthMm === null || item.lengthMm === undefined) {
+        audit(`${reason}: ${Math.round(lengthMm)} mm off the roll (length not tracked)`);
+        return 0;
+      }
+      const left = Math.max(0, item.lengthMm - lengthMm);
+      audit(`${reason}: roll ${item.lengthMm} → ${left} mm`);
+      const taken = item.lengthMm - left;
+      item.lengthMm = left;
+      item.updatedBy = byEmail;
+      return taken;
     }
-    const left = Math.max(0, item.quantity - count);
-    recordAudit(em, { workshopId, subjectType: 'stock', subjectId: id, action: 'cut', summary: `${reason}: ${item.quantity} → ${left}`, actorEmail: byEmail });
-    if (left === 0 && item.kind === 'remnant') em.remove(item);
+    if (item.quantity === null || item.quantity === undefined) {
+      audit(`${reason} (unlimited stock)`);
+      return 0;
+    }
+    if (item.quantity === 0) {
+      audit(`${reason} (none left in stock)`);
+      return 0;
+    }
+    audit(`${reason}: ${item.quantity} → ${item.quantity - 1}`);
+    if (item.quantity === 1 && item.kind === 'remnant') em.remove(item);
     else {
-      item.quantity = left;
+      item.quantity -= 1;
       item.updatedBy = byEmail;
     }
-    return left;
+    return 1;
   }
 
-  /** Puts back what `deduct` took (a cut sheet un-ticked). */
-  async restore(workshopId: number, id: number, count: number, byEmail: string, reason: string, em: EntityManager = this.em): Promise<void> {
+  /** Puts back what `takeCut` took (a sheet un-ticked). A used-up remnant is not brought back. */
+  async putBack(workshopId: number, id: number, amount: number, byEmail: string, reason: string, em: EntityManager = this.em): Promise<void> {
+    if (amount <= 0) return;
     const item = await em.findOne(StockItem, { id, workshop: workshopId });
-    if (!item || item.quantity === null || item.quantity === undefined) return;
-    recordAudit(em, { workshopId, subjectType: 'stock', subjectId: id, action: 'update', summary: `${reason}: ${item.quantity} → ${item.quantity + count}`, actorEmail: byEmail });
-    item.quantity += count;
+    if (!item) return;
+    const audit = (summary: string) => recordAudit(em, { workshopId, subjectType: 'stock', subjectId: id, action: 'update', summary, actorEmail: byEmail });
+    if (item.kind === 'roll') {
+      if (item.lengthMm === null || item.lengthMm === undefined) return;
+      audit(`${reason}: roll ${item.lengthMm} → ${item.lengthMm + amount} mm`);
+      item.lengthMm += amount;
+    } else {
+      if (item.quantity === null || item.quantity === undefined) return;
+      audit(`${reason}: ${item.quantity} → ${item.quantity + amount}`);
+      item.quantity += amount;
+    }
     item.updatedBy = byEmail;
+  }
+
+  /** Removes remnants an un-ticked sheet had added, when they are still in the room unchanged. */
+  async removeRemnants(workshopId: number, ids: number[], byEmail: string, reason: string, em: EntityManager = this.em): Promise<void> {
+    if (!ids.length) return;
+    const items = await em.find(StockItem, { id: { $in: ids }, workshop: workshopId, kind: 'remnant', quantity: 1 });
+    for (const item of items) {
+      recordAudit(em, { workshopId, subjectType: 'stock', subjectId: item.id, action: 'delete', summary: `${reason}: removed offcut ${item.widthMm} × ${item.heightMm} mm`, actorEmail: byEmail });
+      em.remove(item);
+    }
   }
 
   /** Adds kept offcuts of a cut plan as remnants (quantity 1 each); returns their ids after the caller's flush. */
