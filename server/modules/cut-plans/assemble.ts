@@ -271,8 +271,6 @@ export function emptyLayout(group: PreparedGroup, parts: readonly CutPlanPartDto
 
 // ─── After nesting ──────────────────────────────────────────────────────────────────────────────
 
-const STOCK_WORD = { panels: 'sheets', lining: 'lining rolls' } as const;
-
 /** Plain warnings for everything that was not placed, naming the part, its cabinet and its size. */
 export function layoutWarnings(groups: readonly { meta: PreparedGroup['meta']; layout: Layout }[], parts: readonly CutPlanPartDto[]): CutPlanWarning[] {
   const byId = new Map(parts.map((p) => [p.id, p]));
@@ -283,7 +281,10 @@ export function layoutWarnings(groups: readonly { meta: PreparedGroup['meta']; l
       const n = noStock.reduce((a, u) => a + u.quantity, 0);
       out.push({
         code: 'no_stock',
-        message: `No ${STOCK_WORD[meta.kind]} of ${meta.label} in the stock chosen: ${n} part${n === 1 ? '' : 's'} not placed. Add ${meta.kind === 'lining' ? 'a roll' : 'sheets'} of this ${meta.kind === 'lining' ? 'thickness' : 'material and thickness'}.`,
+        message:
+          meta.kind === 'lining'
+            ? `No lining roll ${fmtMm(meta.thicknessMm)} mm thick in the stock chosen: ${n} lining piece${n === 1 ? '' : 's'} not placed. Add a roll of this thickness.`
+            : `No sheets of ${meta.label} in the stock chosen: ${n} panel${n === 1 ? '' : 's'} not placed. Add sheets of this material and thickness.`,
         field: meta.key,
       });
     }
