@@ -123,6 +123,8 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
   const [size, setSize] = useState({ width: 0, height: 0 });
   const [hover, setHover] = useState<{ hit: HitId; view: ViewName } | null>(null);
   const fittedRef = useRef(false);
+  /** The camera of the last fit; once the user zooms or pans, the view is theirs and is not refitted. */
+  const fitCamera = useRef<EditorState['camera'] | null>(null);
   const { doc, camera, units } = state;
 
   useLayoutEffect(() => {
@@ -141,11 +143,27 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
     if (!fittedRef.current || fitRequest > 0) {
       editor.fitToView(size);
       fittedRef.current = true;
+      fitCamera.current = editor.getState().camera;
     }
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [fitRequest, size.width > 0 && size.height > 0]);
 
   const layout = useMemo(() => layoutViews(doc), [doc]);
+
+  // When the box changes size outside a drag (a typed value, the form) and no longer fits, fit again,
+  // unless the user has zoomed or panned since the last fit.
+  const idle = state.tool.name === 'idle';
+  useEffect(() => {
+    if (!idle || size.width === 0 || !fittedRef.current || editor.getState().camera !== fitCamera.current) return;
+    const b = layout.bounds;
+    const a = editor.worldToScreen({ x: b.minX, y: b.maxY });
+    const c = editor.worldToScreen({ x: b.maxX, y: b.minY });
+    if (a.x < -1 || a.y < -1 || c.x > size.width + 1 || c.y > size.height + 1) {
+      editor.fitToView(size);
+      fitCamera.current = editor.getState().camera;
+    }
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [doc.outer, idle]);
   const prims = useMemo(() => Object.fromEntries(VIEWS.map((v) => [v, projectView(doc, v)])) as Record<ViewName, Prim[]>, [doc]);
 
   const localPoint = useCallback((e: { clientX: number; clientY: number }) => {
