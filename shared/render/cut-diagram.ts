@@ -12,7 +12,7 @@ import { CUT_DIAGRAM_CAUTIONS, CUT_DIAGRAM_FOOT_CAUTION } from './cautions.js';
 import { cutListRows, materialTotals, numberSheets, placedArea, type MaterialTotals, type NumberedSheet, type StockInfo } from './cut-list.js';
 import { PAPER_SIZES_MM, type SheetPaperName } from './paper.js';
 import { PT_PER_MM, type PdfSink } from './pdf-sink.js';
-import { drawScene, estimateTextWidthMm, line, sceneToSvg, text, textBlock, type LineStyle, type Prim } from './scene.js';
+import { clipText, drawScene, estimateTextWidthMm, line, sceneToSvg, text, textBlock, type LineStyle, type Prim } from './scene.js';
 import { fmtMm } from './stencil-items.js';
 
 export interface CutDiagramInput {
@@ -230,7 +230,7 @@ function legendLine(i: number, p: LayoutSheet['placements'][number], part: CutPa
 /** The placements' numbers and names in columns from (x, y), `rows` to a column. */
 function legendPrims(lines: readonly string[], x: number, y: number, widthMm: number, cols: number, rows: number): Prim[] {
   const colW = widthMm / cols;
-  return lines.map((l, i) => text(x + Math.floor(i / rows) * colW, y + (i % rows) * LEGEND_LINE_MM, clip(l, colW - 2, LEGEND_MM), LEGEND_MM));
+  return lines.map((l, i) => text(x + Math.floor(i / rows) * colW, y + (i % rows) * LEGEND_LINE_MM, clipText(l, colW - 2, LEGEND_MM), LEGEND_MM));
 }
 
 function sheetName(n: NumberedSheet): string {
@@ -279,14 +279,6 @@ function sheetPages(n: NumberedSheet, input: CutDiagramInput, parts: ReadonlyMap
     });
   }
   return pages;
-}
-
-/** Shortens `value` with an ellipsis so that it fits `widthMm` (by the estimate). */
-function clip(value: string, widthMm: number, sizeMm: number): string {
-  if (estimateTextWidthMm(value, sizeMm) <= widthMm) return value;
-  let v = value;
-  while (v.length > 1 && estimateTextWidthMm(`${v}…`, sizeMm) > widthMm) v = v.slice(0, -1);
-  return `${v}…`;
 }
 
 function money(v: number, currency?: string): string {
@@ -365,7 +357,7 @@ function tablePages(input: CutDiagramInput, paper: SheetPaperName): Page[] {
     cells.forEach((c, k) => {
       const [, share, align] = cols[k]!;
       const color = r.sheet === 'not placed' ? '#b71c1c' : '#000000';
-      prims.push(text(align === 'right' ? x + share * w - 2 : x, y, clip(c, share * w - 3, 2.9), 2.9, { align, color }));
+      prims.push(text(align === 'right' ? x + share * w - 2 : x, y, clipText(c, share * w - 3, 2.9), 2.9, { align, color }));
       x += share * w;
     });
     y += lh;

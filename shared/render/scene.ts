@@ -74,6 +74,14 @@ export function estimateTextWidthMm(value: string, sizeMm: number, font: FontNam
   return em * sizeMm * (font === 'bold' ? 1.08 : 1);
 }
 
+/** Shortens `value` with an ellipsis so that it fits `widthMm` (by the estimate). */
+export function clipText(value: string, widthMm: number, sizeMm: number, font: FontName = 'regular'): string {
+  if (estimateTextWidthMm(value, sizeMm, font) <= widthMm) return value;
+  let v = value;
+  while (v.length > 1 && estimateTextWidthMm(`${v}…`, sizeMm, font) > widthMm) v = v.slice(0, -1);
+  return `${v}…`;
+}
+
 /** Breaks `value` into lines no wider than `widthMm` (by the estimate), at spaces. */
 export function wrapText(value: string, widthMm: number, sizeMm: number, font: FontName = 'regular'): string[] {
   const lines: string[] = [];

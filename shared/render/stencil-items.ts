@@ -6,6 +6,7 @@
 import type { Face } from '../schemas/design.schema.js';
 import type { LiningPiecePlan, PanelHole, PanelPlan, Point } from '../schemas/plan.types.js';
 import type { BuildCabinet } from './build.js';
+import { estimateTextWidthMm } from './scene.js';
 
 export interface Bounds {
   minX: number;
@@ -55,6 +56,37 @@ export function boundsOf(points: readonly Point[]): Bounds {
   return b;
 }
 
+/** Even–odd rule: is (x, y) inside the polygon? */
+function inside(poly: readonly Point[], x: number, y: number): boolean {
+  let odd = false;
+  for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
+    const [xi, yi] = poly[i]!;
+    const [xj, yj] = poly[j]!;
+    if (yi > y !== yj > y && x < ((xj - xi) * (y - yi)) / (yj - yi) + xi) odd = !odd;
+  }
+  return odd;
+}
+
+/**
+ * Where a label of w × h (mm) sits on a piece: the first of a few spots (the centre first) where the
+ * label lies on the material, clear of every hole's bounding box; the centre when none is.
+ */
+export function labelSpot(outline: readonly Point[], holes: readonly (readonly Point[])[], w: number, h: number): [number, number] {
+  const b = boundsOf(outline);
+  const holeBoxes = holes.map(boundsOf);
+  const fractions: [number, number][] = [[0.5, 0.5], [0.5, 0.75], [0.5, 0.25], [0.3, 0.5], [0.7, 0.5], [0.5, 0.88], [0.5, 0.12], [0.3, 0.8], [0.7, 0.2]];
+  for (const [fx, fy] of fractions) {
+    const x = b.minX + fx * (b.maxX - b.minX);
+    const y = b.minY + fy * (b.maxY - b.minY);
+    const box = { minX: x - w / 2, maxX: x + w / 2, minY: y - h / 2, maxY: y + h / 2 };
+    const corners: Point[] = [[box.minX, box.minY], [box.maxX, box.minY], [box.maxX, box.maxY], [box.minX, box.maxY]];
+    const onMaterial = corners.every(([px, py]) => inside(outline, px, py));
+    const clear = holeBoxes.every((hb) => hb.maxX < box.minX || hb.minX > box.maxX || hb.maxY < box.minY || hb.minY > box.maxY);
+    if (onMaterial && clear) return [x, y];
+  }
+  return [(b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2];
+}
+
 const FACE_WORDS: Record<Face, string> = {
   front: 'front (baffle)',
   back: 'back',
@@ -75,9 +107,8 @@ function liningItem(cabinet: BuildCabinet, piece: LiningPiecePlan): StencilItem 
     { role: 'cut', type: 'poly', points: piece.outline, closed: true },
     ...piece.holes.map((h): StencilShape => ({ role: 'cut', type: 'poly', points: h, closed: true })),
   ];
-  const cx = (bounds.minX + bounds.maxX) / 2;
-  const cy = (bounds.minY + bounds.maxY) / 2;
   const size = Math.min(8, Math.max(3, (bounds.maxX - bounds.minX) / 25));
+  const [cx, cy] = labelSpot(piece.outline, piece.holes, estimateTextWidthMm(piece.name, size), size * 2.6);
   return {
     kind: 'lining',
     name: `${cabinet.name} — ${piece.name}`,

@@ -14,7 +14,7 @@ import type { Point } from '../schemas/plan.types.js';
 import { PAPER_SIZES_MM, SHEET_PAPERS, paperLabel, type Paper } from './paper.js';
 import type { PdfSink } from './pdf-sink.js';
 import { PT_PER_MM } from './pdf-sink.js';
-import { drawScene, line, text, textBlock, type LineStyle, type Prim } from './scene.js';
+import { clipText, drawScene, line, text, textBlock, type LineStyle, type Prim } from './scene.js';
 import { STENCIL_CAUTION } from './cautions.js';
 import type { Bounds, StencilItem, StencilShape } from './stencil-items.js';
 import { tileAxis, tileLabel, type TileAxis } from './tiling.js';
@@ -388,19 +388,22 @@ function coverPagePrims(layout: StencilLayout, title: string, pageCount: number,
     }
     y += 3;
   }
-  const cols = [m, m + w * 0.56, m + w * 0.76, m + w * 0.88];
+  const cols = [m, m + w * COVER_NAME_SHARE, m + w * 0.79, m + w * 0.89];
   const head = ['Stencil', 'Quantity', 'Tiles', 'Pages'];
   head.forEach((h, i) => prims.push(text(cols[i]!, y, h, 3, { font: 'bold' })));
   y += 1.5;
   prims.push(line(m, y, m + w, y, { color: '#000000', widthMm: 0.2 }));
   y += 4.5;
   for (const row of entries) {
-    row.forEach((cell, i) => prims.push(text(cols[i]!, y, cell, 2.9)));
+    row.forEach((cell, i) => prims.push(text(cols[i]!, y, cell, COVER_TEXT_MM)));
     y += 4.6;
   }
   prims.push(text(cover.widthMm - m, cover.heightMm - m / 2 + 1, `${title} · page ${part.index + 1} of ${pageCount}`, 2.4, { align: 'right', color: '#777777' }));
   return prims;
 }
+
+const COVER_TEXT_MM = 2.9;
+const COVER_NAME_SHARE = 0.63;
 
 /** Rows of the cover's table that fit on one cover page. */
 function coverRowsPerPage(layout: StencilLayout): number {
@@ -421,11 +424,12 @@ export function buildStencilDocument(layout: StencilLayout, title: string): Sten
   const coverCount = Math.max(1, Math.ceil(layout.items.length / perPage));
   const pageCount = coverCount + layout.tiles.length;
   const entries: string[][] = [];
+  const nameColMm = (layout.cover.widthMm - 2 * layout.options.marginMm) * COVER_NAME_SHARE - 3;
   let next = coverCount + 1;
   layout.items.forEach((item, i) => {
     const g = layout.grids[i]!;
     const n = g.cols.count * g.rows.count;
-    entries.push([shorten(item.name, 58), String(item.quantityPerCabinet * item.cabinetCount), `${g.cols.count} × ${g.rows.count}`, n === 1 ? String(next) : `${next}–${next + n - 1}`]);
+    entries.push([clipText(item.name, nameColMm, COVER_TEXT_MM), String(item.quantityPerCabinet * item.cabinetCount), `${g.cols.count} × ${g.rows.count}`, n === 1 ? String(next) : `${next}–${next + n - 1}`]);
     next += n;
   });
   const pages: StencilDocument['pages'] = [];
@@ -440,10 +444,6 @@ export function buildStencilDocument(layout: StencilLayout, title: string): Sten
     pages.push({ widthMm: tile.pageWidthMm, heightMm: tile.pageHeightMm, prims: tilePagePrims(layout, tile, coverCount + i + 1, pageCount, title) });
   });
   return { pages, coverPages: coverCount };
-}
-
-function shorten(value: string, max: number): string {
-  return value.length <= max ? value : `${value.slice(0, max - 1)}…`;
 }
 
 /** Draws the whole stencil set onto the sink, one sink page per page. */

@@ -16,7 +16,7 @@ import {
 } from '../../../shared/render/stencils.js';
 import { rowLetter, tileCount, tileLabel } from '../../../shared/render/tiling.js';
 import { FakeSink, clipSegment, type Segment } from './fake-sink.js';
-import { BOOKSHELF_CABINET, LEFT_NOTCHED, TALL } from './fixtures.js';
+import { BACK_LOWER, BOOKSHELF_CABINET, LEFT_NOTCHED, TALL } from './fixtures.js';
 import { demoBuild } from './demo-build.js';
 
 /** Band above the drawing area: the 4 in calibration square (101.6 mm) and a 5 mm gap. */
@@ -336,5 +336,17 @@ describe('stencil options', () => {
         expect(r.message.startsWith(field)).toBe(true);
       }
     }
+  });
+});
+
+describe('piece labels', () => {
+  it('sit on the material, clear of the holes (the back lining’s port hole is at its centre)', () => {
+    const [item] = stencilItemsFromBuild([{ ...BOOKSHELF_CABINET, plan: { panels: [], liningPieces: [BACK_LOWER] } }]);
+    const name = item!.labels[0]!;
+    // Port hole Ø 66 at (94.5, 74.5): it spans y 41.5 … 107.5; the piece's centre (94.5, 96.5) lies in it.
+    const halfH = name.sizeMm * 1.3;
+    expect(name.y - halfH > 107.5 || name.y + halfH < 41.5).toBe(true);
+    expect(name.y).toBeGreaterThan(0);
+    expect(name.y).toBeLessThan(193);
   });
 });
