@@ -41,7 +41,7 @@ export function designRoutes(designs: DesignsService, lookup: RoleLookup): Route
   });
 
   router.delete('/:id', edit, async (req, res) => {
-    await designs.remove(accessOf(res).workshopId, idParam(req, 'id'));
+    await designs.remove(accessOf(res).workshopId, idParam(req, 'id'), userOf(req).email);
     res.status(204).end();
   });
 

@@ -4,6 +4,7 @@ import type { DesignDto, DesignSummaryDto } from '../../../shared/schemas/api.sc
 import type { Design as DesignJson } from '../../../shared/schemas/design.schema.js';
 import type { Plan } from '../../../shared/schemas/plan.types.js';
 import { AppError } from '../../errors.js';
+import { recordAudit } from '../audit/audit.service.js';
 import { Design } from './design.entity.js';
 
 const NAME_MAX = 120;
@@ -65,6 +66,7 @@ export class DesignsService {
     const data = plannable(input);
     const design = this.em.create(Design, { workshop: workshopId, name: data.name, data, updatedBy: byEmail });
     await this.em.flush();
+    await this.audit(workshopId, design.id, 'create', `Created "${data.name}"`, byEmail, true);
     return toDto(design);
   }
 
@@ -79,12 +81,14 @@ export class DesignsService {
     design.data = data;
     design.name = data.name;
     design.updatedBy = byEmail;
+    await this.audit(workshopId, id, 'update', `Saved "${data.name}" (version ${version + 1})`, byEmail);
     await this.em.flush();
     return toDto(design);
   }
 
-  async remove(workshopId: number, id: number): Promise<void> {
+  async remove(workshopId: number, id: number, byEmail?: string): Promise<void> {
     const design = await this.find(workshopId, id);
+    await this.audit(workshopId, id, 'delete', `Deleted "${design.name}"`, byEmail);
     this.em.remove(design);
     await this.em.flush();
   }
@@ -95,6 +99,7 @@ export class DesignsService {
     const data: DesignJson = { ...structuredClone(source.data), name };
     const copy = this.em.create(Design, { workshop: workshopId, name, data, updatedBy: byEmail });
     await this.em.flush();
+    await this.audit(workshopId, copy.id, 'create', `Duplicated "${source.name}" as "${name}"`, byEmail, true);
     return toDto(copy);
   }
 
@@ -103,6 +108,12 @@ export class DesignsService {
     const outcome = planDesign(design.data);
     if (!outcome.ok) throw AppError.invalid(`This saved design cannot be planned: ${outcome.message}`, outcome.fields);
     return outcome.plan;
+  }
+
+  /** History (server/modules/audit): recorded with the change's flush, or flushed at once after a create. */
+  private async audit(workshopId: number, id: number, action: string, summary: string, byEmail: string | undefined, flush = false): Promise<void> {
+    recordAudit(this.em, { workshopId, subjectType: 'design', subjectId: id, action, summary, actorEmail: byEmail ?? 'unknown' });
+    if (flush) await this.em.flush();
   }
 
   private find(workshopId: number, id: number): Promise<Design> {
