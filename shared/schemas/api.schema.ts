@@ -317,7 +317,7 @@ export interface NestJobDto {
 
 /** A stock item as the cut plan used it (a snapshot: the stock room may change later). */
 export interface CutPlanStockDto {
-  /** The nest job's stock id; a stock room item's id as text, or `typed-N`. */
+  /** The nest job's stock id (what layout sheets name): `#12` for stock room item 12, `typed 1` for typed-in stock. */
   id: string;
   /** The stock room item, or null for typed-in stock. */
   stockItemId: number | null;

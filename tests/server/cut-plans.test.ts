@@ -77,7 +77,7 @@ describe('the demo build planned on the demo stock', () => {
 
   it('keeps the stock as it was (a snapshot with the stock room ids) and the settings with their defaults', () => {
     expect(plan.stock.map((s) => s.stockItemId)).toEqual(stockIds);
-    expect(plan.stock[0]).toMatchObject({ id: String(stockIds[0]), kind: 'sheet', material: 'MDF', thicknessMm: 18, widthMm: 2440, heightMm: 1220, trimMm: 10 });
+    expect(plan.stock[0]).toMatchObject({ id: `#${stockIds[0]}`, kind: 'sheet', material: 'MDF', thicknessMm: 18, widthMm: 2440, heightMm: 1220, trimMm: 10 });
     expect(plan.stock[2]).toMatchObject({ kind: 'roll', trimMm: 0 });
     // Kerf 3.2 mm: a common panel-saw blade (common practice); trim 10 mm; guillotine cuts.
     expect(plan.settings).toMatchObject({ kerfMm: 3.2, trimMm: 10, mode: 'guillotine', minOffcutMm: 200 });
@@ -95,7 +95,7 @@ describe('the demo build planned on the demo stock', () => {
     expect(plan.totals.sheetsUsed).toBe(boards.length);
     const rollMm = rolls.reduce((a, s) => a + s.height, 0);
     expect(plan.totals.rollLengthMm).toBeCloseTo(rollMm, 6);
-    const sheetCost = boards.reduce((a, s) => a + (s.stockId === String(stockIds[0]) ? 42 : 58), 0);
+    const sheetCost = boards.reduce((a, s) => a + (s.stockId === `#${stockIds[0]}` ? 42 : 58), 0);
     expect(plan.totals.cost!).toBeCloseTo(sheetCost + (rollMm / 1000) * 6.5, 2);
     // Lining mass per cabinet from the cabinet engine, × cabinets.
     const shelf = planDesign(DEMO_BOOKSHELF);
@@ -130,7 +130,7 @@ describe('warnings', () => {
     // Floorstander sides, back are 1000 mm long: no 900 × 600 sheet (less 2 × 10 mm trim) holds them.
     expect(big.map((w) => w.message)).toEqual(expect.arrayContaining([expect.stringMatching(/^Left side \(Harbour slim floorstander, 257 × 1000 mm\) is larger than every sheet in stock/)]));
     expect(p.totals.partsUnplaced).toBeGreaterThan(0);
-    expect(p.stock.every((s) => s.stockItemId === null && s.id.startsWith('typed-'))).toBe(true);
+    expect(p.stock.every((s) => s.stockItemId === null && s.id.startsWith('typed '))).toBe(true);
     validAll(p);
   });
 

@@ -47,7 +47,7 @@ export function stockSnapshot(
     return {
       ok: true,
       stock: settings.typedStock.map((s: StockValues, i): CutPlanStockDto => ({
-        id: `typed-${i + 1}`,
+        id: `typed ${i + 1}`,
         stockItemId: null,
         kind: s.kind,
         material: s.material,
@@ -80,7 +80,7 @@ export function stockSnapshot(
   return {
     ok: true,
     stock: chosen.map((s) => ({
-      id: String(s.id),
+      id: `#${s.id}`,
       stockItemId: s.id,
       kind: s.kind,
       material: s.material,
