@@ -3,8 +3,9 @@
  * parts list that maps a layout's `partId` to something a person can read.
  */
 import type { NestJobInput } from '../schemas/nest.schema.js';
+import type { CutPlanPartDto } from '../schemas/api.schema.js';
 import type { Design } from '../schemas/design.schema.js';
-import type { LiningPiecePlan, PanelGrain, PanelPlan, Plan } from '../schemas/plan.types.js';
+import type { LiningPiecePlan, PanelPlan, Plan } from '../schemas/plan.types.js';
 import { slugify } from './file-names.js';
 
 /** One cabinet design of a build. */
@@ -24,22 +25,11 @@ export interface BuildCabinet {
   liningMaterial?: string;
 }
 
-/** One line of the parts list: what a placement with this `id` is. */
-export interface CutPart {
-  id: string;
-  kind: 'panel' | 'lining';
-  /** "Left side". */
-  name: string;
-  /** "Harbour bookshelf". */
-  cabinet: string;
-  widthMm: number;
-  heightMm: number;
-  thicknessMm: number;
-  /** For the whole build (per cabinet × cabinets). */
-  quantity: number;
-  grain: PanelGrain;
-  material: string;
-}
+/**
+ * One line of the parts list: what a placement with this `id` is — name, cabinet, cut size, thickness,
+ * quantity for the whole build, grain, material. The cut-plan API sends the same shape.
+ */
+export type CutPart = CutPlanPartDto;
 
 /**
  * The parts of a build: every panel and lining piece of every cabinet design, quantities multiplied
