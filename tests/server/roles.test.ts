@@ -15,11 +15,10 @@ import { Build } from '../../server/modules/builds/build.entity.js';
 import { BuildsService } from '../../server/modules/builds/builds.service.js';
 import { CutPlan } from '../../server/modules/cut-plans/cut-plan.entity.js';
 import { closeNestPool } from '../../server/workers/pool.js';
-import { DEMO_ROLL, DEMO_SHEET, finished, makeCutPlan, pollJob } from './cut-plans.helpers.js';
+import { demoBuildId, DEMO_ROLL, DEMO_SHEET, finished, makeCutPlan, pollJob } from './cut-plans.helpers.js';
 import { buildTestApp, DEMO, signIn, signUp, type Agent, type TestApp } from './helpers.js';
 import { StockService } from '../../server/modules/stock/stock.service.js';
 import { StockItem } from '../../server/modules/stock/stock-item.entity.js';
-import { demoBuildId, makeCutPlan } from './cut-plans.helpers.js';
 
 type Who = 'owner' | 'designer' | 'maker' | 'viewer' | 'outsider' | 'signedOut';
 const WHO: Who[] = ['owner', 'designer', 'maker', 'viewer', 'outsider', 'signedOut'];
@@ -328,7 +327,7 @@ CASES.push(...FLOOR_CASES);
 describe('role matrix', () => {
   it('covers every route of the API table in DEVELOPERS.md that needs a signed-in user', () => {
     // signup, login and health are open to anyone and have their own tests (auth.test.ts, errors.test.ts).
-    expect(CASES).toHaveLength(13 + FLOOR_CASES.length);
+    expect(CASES).toHaveLength(13 + 16 + FLOOR_CASES.length);
   });
 
   for (const c of CASES) {
