@@ -11,8 +11,8 @@ import type { CutPart } from './build.js';
 import { CUT_DIAGRAM_CAUTIONS, CUT_DIAGRAM_FOOT_CAUTION } from './cautions.js';
 import { cutListRows, materialTotals, numberSheets, placedArea, type MaterialTotals, type NumberedSheet, type StockInfo } from './cut-list.js';
 import { PAPER_SIZES_MM, type SheetPaperName } from './paper.js';
-import { PT_PER_MM, type PdfSink } from './pdf-sink.js';
-import { clipText, drawScene, estimateTextWidthMm, line, sceneToSvg, text, textBlock, type LineStyle, type Prim } from './scene.js';
+import type { PdfSink } from './pdf-sink.js';
+import { clipText, drawPages, estimateTextWidthMm, line, sceneToSvg, text, textBlock, type LineStyle, type Prim, type ScenePage } from './scene.js';
 import { fmtMm } from './stencil-items.js';
 
 export interface CutDiagramInput {
@@ -192,11 +192,7 @@ function sheetStats(n: NumberedSheet, kerfMm: number | undefined): string {
   return bits.join(' · ');
 }
 
-interface Page {
-  widthMm: number;
-  heightMm: number;
-  prims: Prim[];
-}
+
 
 const MARGIN = 10;
 
@@ -238,7 +234,7 @@ function sheetName(n: NumberedSheet): string {
 }
 
 /** The sheet's page, and when its parts list would crowd the drawing, pages with the list alone. */
-function sheetPages(n: NumberedSheet, input: CutDiagramInput, parts: ReadonlyMap<string, CutPart>, paper: SheetPaperName, sheetCount: number, index: number): Page[] {
+function sheetPages(n: NumberedSheet, input: CutDiagramInput, parts: ReadonlyMap<string, CutPart>, paper: SheetPaperName, sheetCount: number, index: number): ScenePage[] {
   const s = n.sheet;
   const page = pageSize(paper, s.width >= s.height);
   const stock = input.stock ?? [];
@@ -258,7 +254,7 @@ function sheetPages(n: NumberedSheet, input: CutDiagramInput, parts: ReadonlyMap
   const grain = info?.grain === 'length' ? ' · grain along the length' : '';
   prims.push(fitted(MARGIN, MARGIN + 9.5, `${sheetStats(n, input.kerfMm)} · scale 1:${(1 / scale).toFixed(1)}${grain}`, availW, 3));
   prims.push(...sheetPrims(s, parts, MARGIN + (availW - s.width * scale) / 2, top, scale, { textMm: 3.2, lineScale: 1 }, info?.trim ?? 0));
-  const pages: Page[] = [{ widthMm: page.w, heightMm: page.h, prims }];
+  const pages: ScenePage[] = [{ widthMm: page.w, heightMm: page.h, prims }];
   if (inline) {
     prims.push(...legendPrims(lines, MARGIN, top + s.height * scale + 5, availW, cols, rows));
     return pages;
@@ -309,7 +305,7 @@ export function totalsLines(t: MaterialTotals, currency?: string, parts: Readonl
   return lines;
 }
 
-function tablePages(input: CutDiagramInput, paper: SheetPaperName): Page[] {
+function tablePages(input: CutDiagramInput, paper: SheetPaperName): ScenePage[] {
   const page = pageSize(paper, true);
   const rows = cutListRows(input.layouts, input.parts, input.stock ?? []);
   const totals = materialTotals(input.layouts, input.stock ?? [], input.liningMassKg);
@@ -326,7 +322,7 @@ function tablePages(input: CutDiagramInput, paper: SheetPaperName): Page[] {
     ['Sheet', 0.12, 'left'],
   ];
   const lh = 4.4;
-  const pages: Page[] = [];
+  const pages: ScenePage[] = [];
   let prims: Prim[] = [];
   let y = 0;
   const newPage = (heading: string) => {
@@ -385,7 +381,7 @@ function tablePages(input: CutDiagramInput, paper: SheetPaperName): Page[] {
 }
 
 /** Every page of the cut diagrams (scenes in mm): sheets, then the cut list, totals and cautions. */
-export function buildCutDiagramPages(input: CutDiagramInput, paper: SheetPaperName = 'A4'): Page[] {
+export function buildCutDiagramPages(input: CutDiagramInput, paper: SheetPaperName = 'A4'): ScenePage[] {
   const parts = new Map(input.parts.map((p) => [p.id, p]));
   const numbered = numberSheets(input.layouts, input.stock ?? []);
   const pages = [...numbered.flatMap((n, i) => sheetPages(n, input, parts, paper, numbered.length, i)), ...tablePages(input, paper)];
@@ -395,10 +391,7 @@ export function buildCutDiagramPages(input: CutDiagramInput, paper: SheetPaperNa
 
 /** Draws the cut diagrams onto the sink. */
 export function drawCutDiagrams(sink: PdfSink, input: CutDiagramInput, paper: SheetPaperName = 'A4'): void {
-  for (const page of buildCutDiagramPages(input, paper)) {
-    sink.addPage(page.widthMm * PT_PER_MM, page.heightMm * PT_PER_MM);
-    drawScene(sink, page.prims);
-  }
+  drawPages(sink, buildCutDiagramPages(input, paper));
 }
 
 /**

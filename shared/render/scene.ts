@@ -179,6 +179,21 @@ export function drawScene(sink: PdfSink, prims: readonly Prim[], offset: Offset 
   }
 }
 
+/** A page of a document: its size (mm) and what is drawn on it. */
+export interface ScenePage {
+  widthMm: number;
+  heightMm: number;
+  prims: Prim[];
+}
+
+/** Draws each page onto the sink as a page of its own. */
+export function drawPages(sink: PdfSink, pages: readonly ScenePage[]): void {
+  for (const page of pages) {
+    sink.addPage(page.widthMm * PT_PER_MM, page.heightMm * PT_PER_MM);
+    drawScene(sink, page.prims);
+  }
+}
+
 const num = (v: number) => String(Math.round(v * 1000) / 1000);
 
 export function escapeXml(value: string): string {

@@ -13,8 +13,7 @@ import { issuesToFields, describeFields } from '../errors.js';
 import type { Point } from '../schemas/plan.types.js';
 import { PAPER_SIZES_MM, SHEET_PAPERS, paperLabel, type Paper } from './paper.js';
 import type { PdfSink } from './pdf-sink.js';
-import { PT_PER_MM } from './pdf-sink.js';
-import { clipText, drawScene, line, text, textBlock, type LineStyle, type Prim } from './scene.js';
+import { clipText, drawPages, line, text, textBlock, type LineStyle, type Prim, type ScenePage } from './scene.js';
 import { STENCIL_CAUTION } from './cautions.js';
 import type { Bounds, StencilItem, StencilShape } from './stencil-items.js';
 import { tileAxis, tileLabel, type TileAxis } from './tiling.js';
@@ -413,8 +412,8 @@ function coverRowsPerPage(layout: StencilLayout): number {
 }
 
 export interface StencilDocument {
-  /** Page sizes (mm) in order: cover pages first, then tiles. */
-  pages: { widthMm: number; heightMm: number; prims: Prim[] }[];
+  /** In order: cover pages first, then tiles. */
+  pages: ScenePage[];
   coverPages: number;
 }
 
@@ -449,9 +448,6 @@ export function buildStencilDocument(layout: StencilLayout, title: string): Sten
 /** Draws the whole stencil set onto the sink, one sink page per page. */
 export function drawStencils(sink: PdfSink, items: readonly StencilItem[], options: StencilOptions, title: string): StencilLayout {
   const layout = layoutStencils(items, options);
-  for (const page of buildStencilDocument(layout, title).pages) {
-    sink.addPage(page.widthMm * PT_PER_MM, page.heightMm * PT_PER_MM);
-    drawScene(sink, page.prims);
-  }
+  drawPages(sink, buildStencilDocument(layout, title).pages);
   return layout;
 }
