@@ -192,8 +192,6 @@ function sheetStats(n: NumberedSheet, kerfMm: number | undefined): string {
   return bits.join(' · ');
 }
 
-
-
 const MARGIN = 10;
 
 function pageSize(paper: SheetPaperName, landscape: boolean): { w: number; h: number } {
