@@ -5,8 +5,19 @@
  * `padding` (space between rectangles, none at the border); for binpackingjs, every box and the bin
  * grow by one kerf (the same trick our engine uses). Trim shrinks the bin.
  */
-import { MaxRectsPacker, Rectangle } from 'maxrects-packer';
+import * as maxrects from 'maxrects-packer';
+import { MaxRectsPacker } from 'maxrects-packer';
 import { pack2D, type Box2D } from 'binpackingjs/2d';
+
+// The package exports Rectangle at run time, but its type entry does not declare it.
+interface PackedRect {
+  width: number;
+  height: number;
+  x: number;
+  y: number;
+}
+type RectangleClass = new (width: number, height: number, x: number, y: number, rot: boolean, allowRotation?: boolean) => PackedRect;
+const Rectangle = (maxrects as unknown as { Rectangle: RectangleClass }).Rectangle;
 
 export interface SimpleItem {
   w: number;
@@ -33,18 +44,28 @@ export interface NpmResult {
   ms: number;
 }
 
+/** Items that fit the trimmed sheet in an allowed orientation; the rest count as unplaced. */
+function fitting(job: SimpleJob): { items: SimpleItem[]; tooBig: number } {
+  const W = job.W - 2 * job.trim;
+  const H = job.H - 2 * job.trim;
+  const items = job.items.filter((it) => (it.w <= W && it.h <= H) || (it.turn && it.h <= W && it.w <= H));
+  return { items, tooBig: job.items.length - items.length };
+}
+
 function stripHeight(job: SimpleJob): number {
   let h = 0;
   for (const it of job.items) h += Math.max(it.w, it.h) + job.kerf;
   return h;
 }
 
-export function runMaxrectsPacker(job: SimpleJob): NpmResult {
+export function runMaxrectsPacker(input: SimpleJob): NpmResult {
   const t = performance.now();
+  const { items, tooBig } = fitting(input);
+  const job = { ...input, items };
   const strip = job.H === Infinity;
   const W = job.W - 2 * job.trim;
   const H = strip ? stripHeight(job) : job.H - 2 * job.trim;
-  const packer = new MaxRectsPacker(W, H, job.kerf, {
+  const packer = new MaxRectsPacker<PackedRect & { oversized?: boolean }>(W, H, job.kerf, {
     smart: true,
     pot: false,
     square: false,
@@ -52,7 +73,7 @@ export function runMaxrectsPacker(job: SimpleJob): NpmResult {
     border: 0,
   });
   packer.addArray(job.items.map((it) => new Rectangle(it.w, it.h, 0, 0, false, it.turn)));
-  let unplaced = 0;
+  let unplaced = tooBig;
   let length = 0;
   const bins = packer.bins.filter((b) => {
     const over = b.rects.some((r) => r.oversized);
@@ -63,8 +84,10 @@ export function runMaxrectsPacker(job: SimpleJob): NpmResult {
   return { bins: bins.length, unplaced, ms: performance.now() - t, ...(strip ? { length: length + 2 * job.trim } : {}) };
 }
 
-export function runBinpackingjs(job: SimpleJob): NpmResult {
+export function runBinpackingjs(input: SimpleJob): NpmResult {
   const t = performance.now();
+  const { items, tooBig: oversized } = fitting(input);
+  const job = { ...input, items };
   const strip = job.H === Infinity;
   const k = job.kerf;
   const W = job.W - 2 * job.trim + k;
@@ -82,6 +105,6 @@ export function runBinpackingjs(job: SimpleJob): NpmResult {
     }
     let length = 0;
     if (strip) for (const b of used) for (const x of b.boxes) length = Math.max(length, x.y + x.height - k);
-    return { bins: used.length, unplaced: r.unpackedBoxes.length, ms: performance.now() - t, ...(strip ? { length: length + 2 * job.trim } : {}) };
+    return { bins: used.length, unplaced: oversized + r.unpackedBoxes.length, ms: performance.now() - t, ...(strip ? { length: length + 2 * job.trim } : {}) };
   }
 }
