@@ -5,19 +5,9 @@
  * `padding` (space between rectangles, none at the border); for binpackingjs, every box and the bin
  * grow by one kerf (the same trick our engine uses). Trim shrinks the bin.
  */
-import * as maxrects from 'maxrects-packer';
-import { MaxRectsPacker } from 'maxrects-packer';
+import { MaxRectsPacker, Rectangle as MaxRectsRectangle } from 'maxrects-packer/dist/maxrects-packer.mjs';
 import { pack2D, type Box2D } from 'binpackingjs/2d';
 
-// The package exports Rectangle at run time, but its type entry does not declare it.
-interface PackedRect {
-  width: number;
-  height: number;
-  x: number;
-  y: number;
-}
-type RectangleClass = new (width: number, height: number, x: number, y: number, rot: boolean, allowRotation?: boolean) => PackedRect;
-const Rectangle = (maxrects as unknown as { Rectangle: RectangleClass }).Rectangle;
 
 export interface SimpleItem {
   w: number;
@@ -65,14 +55,14 @@ export function runMaxrectsPacker(input: SimpleJob): NpmResult {
   const strip = job.H === Infinity;
   const W = job.W - 2 * job.trim;
   const H = strip ? stripHeight(job) : job.H - 2 * job.trim;
-  const packer = new MaxRectsPacker<PackedRect & { oversized?: boolean }>(W, H, job.kerf, {
+  const packer = new MaxRectsPacker(W, H, job.kerf, {
     smart: true,
     pot: false,
     square: false,
     allowRotation: job.items.some((i) => i.turn),
     border: 0,
   });
-  packer.addArray(job.items.map((it) => new Rectangle(it.w, it.h, 0, 0, false, it.turn)));
+  packer.addArray(job.items.map((it) => new MaxRectsRectangle(it.w, it.h, 0, 0, false, it.turn)));
   let unplaced = tooBig;
   let length = 0;
   const bins = packer.bins.filter((b) => {

@@ -130,6 +130,7 @@ export function prepareJob(job: NestJob): PreparedJob {
     const usable: StockType[] = [];
     const orients: number[] = [];
     let grainConflict = false;
+    let fitsAcrossGrain = false;
     let materialMatch = false;
     for (const t of stockTypes) {
       const s = job.stock[t.stock]!;
@@ -141,7 +142,10 @@ export function prepareJob(job: NestJob): PreparedJob {
         continue;
       }
       const o = fitOrientations(allowed, w, h, t.W, t.H);
-      if (o === 0) continue;
+      if (o === 0) {
+        if (fitOrientations(ORIENT_AS_GIVEN | ORIENT_TURNED, w, h, t.W, t.H) !== 0) fitsAcrossGrain = true;
+        continue;
+      }
       usable.push(t);
       orients.push(o);
     }
@@ -150,7 +154,9 @@ export function prepareJob(job: NestJob): PreparedJob {
         ? 'no stock of this material and thickness'
         : grainConflict
           ? 'grain and canRotate allow no orientation that fits the stock'
-          : 'larger than every usable stock size (after trim)';
+          : fitsAcrossGrain
+            ? 'fits only turned against its grain or canRotate'
+            : 'larger than every usable stock size (after trim)';
       unfit.push({ part: p, quantity: part.quantity, reason });
       return;
     }
