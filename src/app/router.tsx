@@ -55,6 +55,30 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   },
                 },
                 {
+                  path: 'builds',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/builds');
+                    return { loader: m.clientLoader(queryClient), Component: m.BuildsRoute };
+                  },
+                },
+                {
+                  path: 'builds/:buildId',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/build');
+                    return { loader: m.clientLoader(queryClient), Component: m.BuildRoute };
+                  },
+                },
+                {
+                  path: 'cut-plans/:planId',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/cut-plan');
+                    return { loader: m.clientLoader(queryClient), Component: m.CutPlanRoute };
+                  },
+                },
+                {
                   path: 'members',
                   errorElement: <RouteError />,
                   lazy: async () => {

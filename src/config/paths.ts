@@ -15,6 +15,15 @@ export const paths = {
     getHref: (workshopId: number, designId: number) => `/w/${workshopId}/designs/${designId}`,
   },
   members: { path: '/w/:workshopId/members', getHref: (workshopId: number) => `/w/${workshopId}/members` },
+  builds: { path: '/w/:workshopId/builds', getHref: (workshopId: number) => `/w/${workshopId}/builds` },
+  build: {
+    path: '/w/:workshopId/builds/:buildId',
+    getHref: (workshopId: number, buildId: number) => `/w/${workshopId}/builds/${buildId}`,
+  },
+  cutPlan: {
+    path: '/w/:workshopId/cut-plans/:planId',
+    getHref: (workshopId: number, planId: number) => `/w/${workshopId}/cut-plans/${planId}`,
+  },
 } as const;
 
 /** Only same-site relative paths may be used as a redirect target (no `//evil.example`). */

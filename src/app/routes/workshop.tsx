@@ -43,6 +43,7 @@ export function WorkshopRoute() {
       switchWorkshopHref={me.memberships.length > 1 ? paths.workshops.getHref() : undefined}
       nav={[
         { to: paths.designs.getHref(workshopId), label: 'Designs' },
+        { to: paths.builds.getHref(workshopId), label: 'Builds' },
         { to: paths.members.getHref(workshopId), label: 'Members' },
       ]}
       userEmail={me.user.email}

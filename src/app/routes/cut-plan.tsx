@@ -1,0 +1,52 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { PageHeader } from '../../components/layouts/app-layout';
+import { Alert } from '../../components/ui/alert';
+import { Button } from '../../components/ui/button';
+import { Spinner } from '../../components/ui/spinner';
+import { paths } from '../../config/paths';
+import { formatDateTime, formatNumber } from '../../lib/format';
+import { cutPlanQueryOptions, useCutPlan } from '../../features/cut-plans/api/get-cut-plans';
+import { CutPlanView } from '../../features/cut-plans/components/cut-plan-view';
+import { parseId } from './params';
+import { useWorkshop } from './workshop';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(cutPlanQueryOptions(parseId(params.workshopId), parseId(params.planId)));
+    return null;
+  };
+
+export function CutPlanRoute() {
+  const { workshopId, membership } = useWorkshop();
+  const planId = parseId(useParams().planId);
+  const plan = useCutPlan(workshopId, planId);
+
+  if (plan.isPending) return <Spinner label="Loading the cut plan…" />;
+  if (plan.isError)
+    return (
+      <Alert tone="error" title="Could not load the cut plan" actions={<Button onClick={() => plan.refetch()}>Try again</Button>}>
+        {plan.error.message}
+      </Alert>
+    );
+  const p = plan.data;
+  const s = p.settings;
+  return (
+    <>
+      <title>{`Cut plan ${p.id} · ${p.buildName} · ${membership.workshopName} · Boxwright`}</title>
+      <PageHeader
+        back={
+          p.buildId ? (
+            <Link to={paths.build.getHref(workshopId, p.buildId)} className="text-accent-700 hover:underline">
+              ← {p.buildName}
+            </Link>
+          ) : undefined
+        }
+        title={`Cut plan ${p.id} — ${p.buildName}`}
+        description={`${s.mode === 'guillotine' ? 'Guillotine cuts' : 'Free layout (CNC)'} · kerf ${formatNumber(s.kerfMm)} mm · edge trim ${formatNumber(s.trimMm)} mm · offcuts kept from ${formatNumber(s.minOffcutMm)} mm · made ${formatDateTime(p.createdAt)}${p.createdBy ? ` by ${p.createdBy}` : ''}`}
+      />
+      <CutPlanView workshopId={workshopId} plan={p} />
+    </>
+  );
+}
