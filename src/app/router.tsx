@@ -5,6 +5,7 @@ import { RouteError } from '../components/errors/route-error';
 import { paths } from '../config/paths';
 import { authKeys } from '../features/auth/api/keys';
 import { api } from '../lib/api-client';
+import * as accountLinks from './routes/account-links';
 import * as homeRoute from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 import * as signedInRoute from './routes/signed-in';
@@ -22,6 +23,14 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       children: [
         { path: paths.signIn.path, loader: signInRoute.clientLoader(queryClient), element: <signInRoute.SignInRoute /> },
         { path: paths.signUp.path, loader: signUpRoute.clientLoader(queryClient), element: <signUpRoute.SignUpRoute /> },
+        // Pages opened from e-mailed links, and the "forgot password" form: no sign-in needed.
+        { path: paths.forgotPassword.path, element: <accountLinks.ForgotPasswordRoute /> },
+        { path: paths.resetPassword.path, element: <accountLinks.ResetPasswordRoute /> },
+        { path: paths.invite.path, loader: accountLinks.meLoader(queryClient), element: <accountLinks.InviteRoute /> },
+        {
+          path: paths.sharedPlan.path,
+          lazy: async () => ({ Component: (await import('./routes/shared-plan')).SharedPlanRoute }),
+        },
         {
           id: 'signed-in',
           loader: signedInRoute.clientLoader(queryClient),
@@ -76,6 +85,54 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   lazy: async () => {
                     const m = await import('./routes/cut-plan');
                     return { loader: m.clientLoader(queryClient), Component: m.CutPlanRoute };
+                  },
+                },
+                {
+                  path: 'stock',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/stock');
+                    return { loader: m.clientLoader(queryClient), Component: m.StockRoute };
+                  },
+                },
+                {
+                  path: 'checklists',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/checklists');
+                    return { loader: m.clientLoader(queryClient), Component: m.ChecklistsRoute };
+                  },
+                },
+                {
+                  path: 'cut-plans/:planId/checklist',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/checklist');
+                    return { loader: m.clientLoader(queryClient), Component: m.ChecklistRoute };
+                  },
+                },
+                {
+                  path: 'cut-plans/:planId/share',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/share-plan');
+                    return { Component: m.SharePlanRoute };
+                  },
+                },
+                {
+                  path: 'invitations',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/invitations');
+                    return { Component: m.InvitationsRoute };
+                  },
+                },
+                {
+                  path: 'sent-mail',
+                  errorElement: <RouteError />,
+                  lazy: async () => {
+                    const m = await import('./routes/sent-mail');
+                    return { Component: m.SentMailRoute };
                   },
                 },
                 {

@@ -15,6 +15,22 @@ export const paths = {
     getHref: (workshopId: number, designId: number) => `/w/${workshopId}/designs/${designId}`,
   },
   members: { path: '/w/:workshopId/members', getHref: (workshopId: number) => `/w/${workshopId}/members` },
+  stock: { path: '/w/:workshopId/stock', getHref: (workshopId: number) => `/w/${workshopId}/stock` },
+  invitations: { path: '/w/:workshopId/invitations', getHref: (workshopId: number) => `/w/${workshopId}/invitations` },
+  sentMail: { path: '/w/:workshopId/sent-mail', getHref: (workshopId: number) => `/w/${workshopId}/sent-mail` },
+  checklists: { path: '/w/:workshopId/checklists', getHref: (workshopId: number) => `/w/${workshopId}/checklists` },
+  checklist: {
+    path: '/w/:workshopId/cut-plans/:planId/checklist',
+    getHref: (workshopId: number, planId: number) => `/w/${workshopId}/cut-plans/${planId}/checklist`,
+  },
+  sharePlan: {
+    path: '/w/:workshopId/cut-plans/:planId/share',
+    getHref: (workshopId: number, planId: number) => `/w/${workshopId}/cut-plans/${planId}/share`,
+  },
+  forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+  resetPassword: { path: '/reset-password/:token', getHref: (token: string) => `/reset-password/${token}` },
+  invite: { path: '/invite/:token', getHref: (token: string) => `/invite/${token}` },
+  sharedPlan: { path: '/share/:token', getHref: (token: string) => `/share/${token}` },
   builds: { path: '/w/:workshopId/builds', getHref: (workshopId: number) => `/w/${workshopId}/builds` },
   build: {
     path: '/w/:workshopId/builds/:buildId',

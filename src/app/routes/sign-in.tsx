@@ -24,6 +24,10 @@ export function SignInRoute() {
       subtitle={redirectTo ? 'Please sign in to continue.' : 'Welcome back to your workshop.'}
       footer={
         <>
+          <Link to={paths.forgotPassword.getHref()} className="text-accent-700 hover:underline">
+            Forgot your password?
+          </Link>
+          <span className="mx-2 text-zinc-300">·</span>
           New here?{' '}
           <Link to={paths.signUp.getHref()} className="text-accent-700 hover:underline">
             Create a workshop

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { data, Outlet, redirect, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
-import type { MembershipDto } from '../../../shared/schemas/api.schema';
+import { can, type MembershipDto } from '../../../shared/schemas/api.schema';
 import { AppLayout } from '../../components/layouts/app-layout';
 import { paths } from '../../config/paths';
 import { findMembership, meQueryOptions } from '../../features/auth/api/get-me';
@@ -44,7 +44,15 @@ export function WorkshopRoute() {
       nav={[
         { to: paths.designs.getHref(workshopId), label: 'Designs' },
         { to: paths.builds.getHref(workshopId), label: 'Builds' },
+        ...(can(membership.role, 'readStock') ? [{ to: paths.stock.getHref(workshopId), label: 'Stock room' }] : []),
+        { to: paths.checklists.getHref(workshopId), label: 'Checklists' },
         { to: paths.members.getHref(workshopId), label: 'Members' },
+        ...(can(membership.role, 'manageMembers')
+          ? [
+              { to: paths.invitations.getHref(workshopId), label: 'Invitations' },
+              { to: paths.sentMail.getHref(workshopId), label: 'Sent mail' },
+            ]
+          : []),
       ]}
       userEmail={me.user.email}
       signingOut={logout.isPending}

@@ -36,7 +36,7 @@ export function AppLayout({
             <Brand />
           </Link>
           {workshopName ? (
-            <div className="flex min-w-0 items-center gap-2 border-l border-zinc-200 pl-6">
+            <div className="flex min-w-0 shrink items-center gap-2 border-l border-zinc-200 pl-6">
               <span className="truncate text-sm font-bold text-zinc-800" data-testid="workshop-name">
                 {workshopName}
               </span>
@@ -48,7 +48,7 @@ export function AppLayout({
               ) : null}
             </div>
           ) : null}
-          <nav className="flex items-center gap-1" aria-label="Workshop">
+          <nav className="flex min-w-0 items-center gap-1 overflow-x-auto" aria-label="Workshop">
             {nav.map((item) => (
               <NavLink
                 key={item.to}
@@ -56,7 +56,7 @@ export function AppLayout({
                 end={false}
                 className={({ isActive }) =>
                   cn(
-                    'rounded-md px-3 py-1.5 text-sm',
+                    'rounded-md px-3 py-1.5 text-sm whitespace-nowrap',
                     isActive ? 'bg-accent-50 text-accent-800' : 'text-zinc-600 hover:bg-zinc-100 hover:text-zinc-900',
                   )
                 }
@@ -66,14 +66,14 @@ export function AppLayout({
             ))}
           </nav>
           <div className="ml-auto flex items-center gap-3">
-            <span className="hidden text-sm text-zinc-600 sm:inline" data-testid="user-email">
+            <span className="hidden text-sm text-zinc-600 xl:inline" data-testid="user-email">
               {userEmail}
             </span>
             <button
               type="button"
               onClick={onSignOut}
               disabled={signingOut}
-              className="rounded-md border border-zinc-300 px-2.5 py-1 text-sm text-zinc-700 hover:bg-zinc-50 disabled:opacity-50"
+              className="shrink-0 rounded-md border border-zinc-300 px-2.5 py-1 text-sm whitespace-nowrap text-zinc-700 hover:bg-zinc-50 disabled:opacity-50"
             >
               Sign out
             </button>

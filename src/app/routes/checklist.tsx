@@ -1,0 +1,47 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { can } from '../../../shared/schemas/api.schema';
+import { HistoryList } from '../../components/history/history-list';
+import { PageHeader } from '../../components/layouts/app-layout';
+import { ButtonLink } from '../../components/ui/button';
+import { Card } from '../../components/ui/card';
+import { paths } from '../../config/paths';
+import { checklistQueryOptions, useChecklist } from '../../features/checklist/api/checklist';
+import { ChecklistView } from '../../features/checklist/components/checklist-view';
+import { parseId } from './params';
+import { useWorkshop } from './workshop';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(checklistQueryOptions(parseId(params.workshopId), parseId(params.planId)));
+    return null;
+  };
+
+export function ChecklistRoute() {
+  const { workshopId, membership } = useWorkshop();
+  const planId = parseId(useParams().planId);
+  const list = useChecklist(workshopId, planId);
+  const canTick = can(membership.role, 'tickParts');
+  return (
+    <>
+      <title>{`Checklist · ${list.data?.buildName ?? 'Cut plan'} · Boxwright`}</title>
+      <PageHeader
+        title={list.data ? `Checklist: ${list.data.buildName}` : 'Checklist'}
+        description={canTick ? 'Tap a piece when it is cut. Every tick records who and when.' : 'Progress of the cut (your role reads it; makers tick).'}
+        back={<Link to={paths.checklists.getHref(workshopId)} className="text-accent-700 hover:underline">← All checklists</Link>}
+        actions={
+          can(membership.role, 'exportPlans') ? (
+            <ButtonLink to={paths.sharePlan.getHref(workshopId, planId)}>Share or send this cut plan</ButtonLink>
+          ) : null
+        }
+      />
+      {list.isPending ? <p className="text-sm text-zinc-500">Loading the checklist…</p> : null}
+      {list.isError ? <p className="text-sm text-red-700">{list.error.message}</p> : null}
+      {list.data ? <ChecklistView workshopId={workshopId} list={list.data} canTick={canTick} /> : null}
+      <Card title="History" className="mt-8 max-w-3xl">
+        <HistoryList workshopId={workshopId} subjectType="plan" subjectId={planId} limit={12} />
+      </Card>
+    </>
+  );
+}

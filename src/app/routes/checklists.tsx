@@ -1,0 +1,45 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, type LoaderFunctionArgs } from 'react-router-dom';
+import { PageHeader } from '../../components/layouts/app-layout';
+import { paths } from '../../config/paths';
+import { floorPlansQueryOptions, useFloorPlans } from '../../features/checklist/api/plans';
+import { formatDateTime } from '../../lib/format';
+import { parseId } from './params';
+import { useWorkshop } from './workshop';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(floorPlansQueryOptions(parseId(params.workshopId)));
+    return null;
+  };
+
+/** The floor: every cut plan, each with its build checklist. */
+export function ChecklistsRoute() {
+  const { workshopId, membership } = useWorkshop();
+  const plans = useFloorPlans(workshopId);
+  return (
+    <>
+      <title>{`Checklists · ${membership.workshopName} · Boxwright`}</title>
+      <PageHeader title="Build checklists" description="Pick a cut plan to tick its pieces and sheets as they are cut." />
+      {plans.isPending ? <p className="text-sm text-zinc-500">Loading…</p> : null}
+      {plans.isError ? <p className="text-sm text-red-700">{plans.error.message}</p> : null}
+      {plans.data?.length === 0 ? <p className="text-sm text-zinc-500">No cut plans yet: make one from a build.</p> : null}
+      <ul className="grid gap-3 md:grid-cols-2">
+        {plans.data?.map((p) => (
+          <li key={p.id}>
+            <Link
+              to={paths.checklist.getHref(workshopId, p.id)}
+              className="block min-h-16 rounded-xl border border-zinc-200 bg-white px-5 py-4 shadow-xs hover:border-accent-300 hover:bg-accent-50/40"
+            >
+              <span className="block text-base font-bold text-zinc-900">{p.buildName}</span>
+              <span className="block text-[13px] text-zinc-500">
+                Cut plan {p.id} · {p.totals.sheetsUsed} sheets · {p.totals.partsPlaced} parts · {formatDateTime(p.createdAt)}
+              </span>
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </>
+  );
+}

@@ -1,0 +1,25 @@
+import { Link, useParams } from 'react-router-dom';
+import { PageHeader } from '../../components/layouts/app-layout';
+import { Card } from '../../components/ui/card';
+import { paths } from '../../config/paths';
+import { SharePanel } from '../../features/share/components/share-panel';
+import { parseId } from './params';
+import { useWorkshop } from './workshop';
+
+export function SharePlanRoute() {
+  const { workshopId, membership } = useWorkshop();
+  const planId = parseId(useParams().planId);
+  return (
+    <>
+      <title>{`Share cut plan ${planId} · ${membership.workshopName} · Boxwright`}</title>
+      <PageHeader
+        title={`Share cut plan ${planId}`}
+        description="A read-only link shows this one cut plan and its files to someone without an account. It expires, and you can withdraw it."
+        back={<Link to={paths.checklist.getHref(workshopId, planId)} className="text-accent-700 hover:underline">← Checklist</Link>}
+      />
+      <Card className="max-w-3xl">
+        <SharePanel workshopId={workshopId} planId={planId} />
+      </Card>
+    </>
+  );
+}

@@ -1,0 +1,37 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { AuditEventDto, ListDto } from '../../../shared/schemas/api.schema';
+import { api } from '../../lib/api-client';
+import { formatDateTime, formatRelativeTime } from '../../lib/format';
+
+export const historyKeys = {
+  all: ['history'] as const,
+  item: (workshopId: number, subjectType: string, subjectId: number) => [...historyKeys.all, workshopId, subjectType, subjectId] as const,
+};
+
+export const historyQueryOptions = (workshopId: number, subjectType: string, subjectId: number) =>
+  queryOptions({
+    queryKey: historyKeys.item(workshopId, subjectType, subjectId),
+    queryFn: () => api.get<ListDto<AuditEventDto>>(`/api/workshops/${workshopId}/history/${subjectType}/${subjectId}`).then((r) => r.items),
+  });
+
+/** The "History" of one design, plan or stock item: who changed what, and when (newest first). */
+export function HistoryList({ workshopId, subjectType, subjectId, limit = 8 }: { workshopId: number; subjectType: 'design' | 'plan' | 'stock' | 'build'; subjectId: number; limit?: number }) {
+  const history = useQuery(historyQueryOptions(workshopId, subjectType, subjectId));
+  if (history.isPending) return <p className="text-sm text-zinc-500">Loading history…</p>;
+  if (history.isError) return <p className="text-sm text-red-700">The history could not be loaded.</p>;
+  const items = history.data.slice(0, limit);
+  if (items.length === 0) return <p className="text-sm text-zinc-500">No changes recorded yet.</p>;
+  return (
+    <ol className="space-y-2" aria-label="History">
+      {items.map((e) => (
+        <li key={e.id} className="text-sm leading-snug">
+          <span className="text-zinc-800">{e.summary}</span>
+          <span className="block text-[13px] text-zinc-500">
+            {e.actorEmail} · <time dateTime={e.at} title={formatDateTime(e.at)}>{formatRelativeTime(e.at)}</time>
+          </span>
+        </li>
+      ))}
+      {history.data.length > limit ? <li className="text-[13px] text-zinc-500">…and {history.data.length - limit} earlier changes</li> : null}
+    </ol>
+  );
+}

@@ -1,0 +1,211 @@
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
+import { Fragment, useMemo, useState } from 'react';
+import type { StockItemDto, StockKind } from '../../../../shared/schemas/api.schema';
+import { HistoryList } from '../../../components/history/history-list';
+import { Button } from '../../../components/ui/button';
+import { ConfirmDialog } from '../../../components/ui/dialog';
+import { Input } from '../../../components/ui/field';
+import { cn } from '../../../lib/cn';
+import { formatNumber, formatRelativeTime } from '../../../lib/format';
+import { useDeleteStockItem } from '../api/stock';
+
+const column = createColumnHelper<StockItemDto>();
+const KIND_LABELS: Record<StockKind, string> = { sheet: 'Sheet', remnant: 'Remnant', roll: 'Roll' };
+const KIND_FILTERS: Array<{ value: StockKind | 'all'; label: string }> = [
+  { value: 'all', label: 'All' },
+  { value: 'sheet', label: 'Sheets' },
+  { value: 'remnant', label: 'Remnants' },
+  { value: 'roll', label: 'Rolls' },
+];
+
+export function stockSize(s: StockItemDto): string {
+  if (s.kind === 'roll') return `${formatNumber(s.widthMm)} mm wide × ${s.lengthMm === null ? 'any length' : `${formatNumber(s.lengthMm / 1000, 2)} m`}`;
+  return `${formatNumber(s.widthMm)} × ${formatNumber(s.heightMm ?? 0)} mm`;
+}
+
+function matches(s: StockItemDto, kind: StockKind | 'all', text: string): boolean {
+  if (kind !== 'all' && s.kind !== kind) return false;
+  const needle = text.trim().toLowerCase();
+  return !needle || `${s.material} ${s.note} ${s.thicknessMm} mm`.toLowerCase().includes(needle);
+}
+
+/** Sheets, remnants and rolls with sort and filter; edit, delete and history per row. */
+export function StockTable({ workshopId, items, canManage, onEdit }: { workshopId: number; items: StockItemDto[]; canManage: boolean; onEdit: (item: StockItemDto) => void }) {
+  const [sorting, setSorting] = useState<SortingState>([]);
+  const [kind, setKind] = useState<StockKind | 'all'>('all');
+  const [text, setText] = useState('');
+  const [open, setOpen] = useState<number | null>(null);
+  const [deleting, setDeleting] = useState<StockItemDto | null>(null);
+  const remove = useDeleteStockItem(workshopId);
+
+  const columns = useMemo(
+    () => [
+      column.accessor('kind', { header: 'Kind', cell: (i) => KIND_LABELS[i.getValue()] }),
+      column.accessor('material', { header: 'Material', cell: (i) => <span className="font-bold text-zinc-900">{i.getValue()}</span> }),
+      column.accessor('thicknessMm', { header: 'Thickness', meta: { numeric: true }, cell: (i) => `${formatNumber(i.getValue())} mm` }),
+      column.accessor((s) => s.widthMm * (s.heightMm ?? s.lengthMm ?? 0), { id: 'size', header: 'Size', cell: (i) => <span className="whitespace-nowrap tabular-nums">{stockSize(i.row.original)}</span> }),
+      column.accessor((s) => s.quantity ?? Number.POSITIVE_INFINITY, {
+        id: 'quantity',
+        header: 'Quantity',
+        meta: { numeric: true },
+        cell: (i) => (i.row.original.quantity === null ? <span title="Unlimited">∞</span> : i.row.original.quantity),
+      }),
+      column.accessor((s) => s.cost ?? -1, {
+        id: 'cost',
+        header: 'Cost',
+        meta: { numeric: true },
+        cell: (i) => (i.row.original.cost === null ? '—' : `${i.row.original.cost.toFixed(2)}${i.row.original.kind === 'roll' ? ' /m' : ''}`),
+      }),
+      column.accessor('grain', { header: 'Grain', cell: (i) => (i.getValue() === 'length' ? 'Along the length' : 'None') }),
+      column.accessor((s) => Date.parse(s.updatedAt), {
+        id: 'updatedAt',
+        header: 'Updated',
+        cell: (i) => (
+          <span className="block text-[13px] leading-snug whitespace-nowrap text-zinc-500">
+            {formatRelativeTime(i.row.original.updatedAt)}
+            {i.row.original.updatedBy ? <span className="block">by {i.row.original.updatedBy}</span> : null}
+          </span>
+        ),
+      }),
+      column.display({
+        id: 'actions',
+        header: () => <span className="sr-only">Actions</span>,
+        cell: (i) => {
+          const s = i.row.original;
+          return (
+            <div className="flex justify-end gap-1">
+              <Button size="sm" variant="ghost" aria-expanded={open === s.id} onClick={() => setOpen(open === s.id ? null : s.id)}>
+                History
+              </Button>
+              {canManage ? (
+                <>
+                  <Button size="sm" variant="ghost" onClick={() => onEdit(s)}>
+                    Edit
+                  </Button>
+                  <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50" onClick={() => setDeleting(s)}>
+                    Delete
+                  </Button>
+                </>
+              ) : null}
+            </div>
+          );
+        },
+      }),
+    ],
+    [canManage, onEdit, open],
+  );
+
+  const table = useReactTable({
+    data: items,
+    columns,
+    state: { sorting, globalFilter: `${kind}|${text}` },
+    onSortingChange: setSorting,
+    globalFilterFn: (row) => matches(row.original, kind, text),
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  });
+  const rows = table.getRowModel().rows;
+
+  return (
+    <>
+      <div className="mb-3 flex flex-wrap items-center gap-3">
+        <div role="group" aria-label="Kind" className="inline-flex rounded-md border border-zinc-300 bg-white p-0.5">
+          {KIND_FILTERS.map((f) => (
+            <button
+              key={f.value}
+              type="button"
+              aria-pressed={kind === f.value}
+              onClick={() => setKind(f.value)}
+              className={cn('rounded px-3 py-1 text-sm', kind === f.value ? 'bg-accent-600 text-white' : 'text-zinc-700 hover:bg-zinc-100')}
+            >
+              {f.label}
+            </button>
+          ))}
+        </div>
+        <div className="w-72">
+          <Input type="search" placeholder="Filter by material, thickness or note" aria-label="Filter stock" value={text} onChange={(e) => setText(e.target.value)} />
+        </div>
+        <p className="ml-auto text-sm text-zinc-500" aria-live="polite">
+          {rows.length === items.length ? `${items.length} items` : `${rows.length} of ${items.length} items`}
+        </p>
+      </div>
+      <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
+        <table className="w-full text-sm" data-testid="stock-table">
+          <thead className="border-b border-zinc-200 bg-zinc-50 text-left text-[13px] text-zinc-500">
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((h) => {
+                  const sorted = h.column.getIsSorted();
+                  const numeric = (h.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
+                  return (
+                    <th key={h.id} scope="col" aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined} className={cn('px-4 py-2.5 font-normal whitespace-nowrap', numeric && 'text-right')}>
+                      {h.column.getCanSort() ? (
+                        <button type="button" onClick={h.column.getToggleSortingHandler()} className={cn('hover:text-zinc-900', sorted && 'text-zinc-900')}>
+                          {flexRender(h.column.columnDef.header, h.getContext())} <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
+                        </button>
+                      ) : (
+                        flexRender(h.column.columnDef.header, h.getContext())
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody className="divide-y divide-zinc-100">
+            {rows.map((row) => (
+              <Fragment key={row.id}>
+                <tr className="hover:bg-zinc-50/70" data-testid="stock-row">
+                  {row.getVisibleCells().map((cell) => (
+                    <td key={cell.id} className={cn('px-4 py-2.5 text-zinc-700', (cell.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric && 'text-right tabular-nums')}>
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  ))}
+                </tr>
+                {open === row.original.id ? (
+                  <tr className="bg-zinc-50/60">
+                    <td colSpan={columns.length} className="px-6 py-3">
+                      <h3 className="mb-2 text-[13px] font-bold text-zinc-700">History</h3>
+                      <HistoryList workshopId={workshopId} subjectType="stock" subjectId={row.original.id} />
+                    </td>
+                  </tr>
+                ) : null}
+              </Fragment>
+            ))}
+            {rows.length === 0 ? (
+              <tr>
+                <td colSpan={columns.length} className="px-5 py-10 text-center text-zinc-500">
+                  {items.length === 0 ? 'The stock room is empty.' : 'Nothing matches that filter.'}
+                </td>
+              </tr>
+            ) : null}
+          </tbody>
+        </table>
+      </div>
+      <ConfirmDialog
+        open={deleting !== null}
+        title="Remove from the stock room?"
+        confirmLabel="Remove"
+        tone="danger"
+        busy={remove.isPending}
+        error={remove.error?.message}
+        onCancel={() => {
+          remove.reset();
+          setDeleting(null);
+        }}
+        onConfirm={() => deleting && remove.mutate(deleting.id, { onSuccess: () => setDeleting(null) })}
+      >
+        {deleting ? `${KIND_LABELS[deleting.kind]} ${deleting.thicknessMm} mm ${deleting.material}, ${stockSize(deleting)}. Cut plans made earlier keep their own copy.` : null}
+      </ConfirmDialog>
+    </>
+  );
+}
