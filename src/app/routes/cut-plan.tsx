@@ -2,7 +2,10 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '../../components/layouts/app-layout';
 import { Alert } from '../../components/ui/alert';
-import { Button } from '../../components/ui/button';
+import { Button, ButtonLink } from '../../components/ui/button';
+import { Card } from '../../components/ui/card';
+import { HistoryList } from '../../components/history/history-list';
+import { can } from '../../../shared/schemas/api.schema';
 import { Spinner } from '../../components/ui/spinner';
 import { paths } from '../../config/paths';
 import { formatDateTime, formatNumber } from '../../lib/format';
@@ -44,9 +47,18 @@ export function CutPlanRoute() {
           ) : undefined
         }
         title={`Cut plan ${p.id} — ${p.buildName}`}
+        actions={
+          <>
+            <ButtonLink to={paths.checklist.getHref(workshopId, p.id)}>Checklist</ButtonLink>
+            {can(membership.role, 'exportPlans') ? <ButtonLink to={paths.sharePlan.getHref(workshopId, p.id)}>Share or send</ButtonLink> : null}
+          </>
+        }
         description={`${s.mode === 'guillotine' ? 'Guillotine cuts' : 'Free layout (CNC)'} · kerf ${formatNumber(s.kerfMm)} mm · edge trim ${formatNumber(s.trimMm)} mm · offcuts kept from ${formatNumber(s.minOffcutMm)} mm · made ${formatDateTime(p.createdAt)}${p.createdBy ? ` by ${p.createdBy}` : ''}`}
       />
       <CutPlanView workshopId={workshopId} plan={p} />
+      <Card title="History" className="mt-8 max-w-3xl">
+        <HistoryList workshopId={workshopId} subjectType="plan" subjectId={p.id} />
+      </Card>
     </>
   );
 }

@@ -7,6 +7,8 @@ import { ErrorBoundary } from '../../components/errors/error-boundary';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { ConflictChanges, saveUnits } from '../../features/studio/conflict';
 import { PageHeader } from '../../components/layouts/app-layout';
+import { Card } from '../../components/ui/card';
+import { HistoryList } from '../../components/history/history-list';
 import { paths } from '../../config/paths';
 import { designQueryOptions } from '../../features/designs/api/get-design';
 import { DesignEditor } from '../../features/designs/components/design-editor';
@@ -66,6 +68,9 @@ export function DesignRoute() {
         )}
         conflictDetails={(theirs, mine) => <ConflictChanges theirs={theirs} mine={mine} units={units} />}
       />
+      <Card title="History" className="mt-8 max-w-3xl">
+        <HistoryList workshopId={workshopId} subjectType="design" subjectId={designId} />
+      </Card>
     </>
   );
 }
