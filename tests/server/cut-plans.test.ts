@@ -181,6 +181,10 @@ describe('who may read and delete', () => {
     await other.agent.get(`/api/workshops/${other.workshopId}/cut-plans/${plan.id}`).expect(404);
     const id = await makeCutPlan(t, workshopId, buildId, { stockIds, timeLimitMs: 200 });
     await viewer.delete(plansPath(id)).expect(403);
+    // A plan with a share link and ticks on its checklist is deleted with them.
+    await maker.post(`${plansPath(id)}/share-links`).send({}).expect(201);
+    const checklist = await maker.get(`${plansPath(id)}/checklist`).expect(200);
+    await maker.post(`${plansPath(id)}/checklist/ticks`).send({ item: 'part', key: checklist.body.parts[0].key, cut: true }).expect(200);
     await maker.delete(plansPath(id)).expect(204);
     await maker.get(plansPath(id)).expect(404);
   });
