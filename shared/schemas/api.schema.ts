@@ -518,6 +518,8 @@ export interface ChecklistProgressDto {
 }
 export interface ChecklistDto {
   planId: number;
+  /** The build it was made from (photos and files are attached to the build); null if the build was deleted. */
+  buildId: number | null;
   buildName: string;
   parts: ChecklistPartDto[];
   sheets: ChecklistSheetDto[];

@@ -82,6 +82,16 @@ const tests: E2ETest[] = [
       await ctx.screenshot('checklist-tablet');
       await page.getByRole('heading', { name: 'History' }).scrollIntoViewIfNeeded();
       await page.getByText(/Marked MDF 18/).first().waitFor();
+
+      // A photo of the build (a real PNG: a screenshot of this page), checked by its content on the server.
+      const photo = await page.screenshot({ clip: { x: 0, y: 0, width: 400, height: 300 } });
+      await page.getByLabel('File', { exact: true }).setInputFiles({ name: 'bench.png', mimeType: 'image/png', buffer: photo });
+      await page.getByRole('img', { name: 'bench.png' }).waitFor();
+      // An SVG is refused whatever it is called.
+      await page.getByLabel('File', { exact: true }).setInputFiles({ name: 'sneaky.png', mimeType: 'image/png', buffer: Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"></svg>') });
+      await page.getByText(/SVG or other markup/).waitFor();
+      await page.getByRole('img', { name: 'bench.png' }).scrollIntoViewIfNeeded();
+      await ctx.screenshot('checklist-files');
     },
   },
   {

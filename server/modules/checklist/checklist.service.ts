@@ -100,6 +100,7 @@ export class ChecklistService {
     const cabinetNames = [...new Set(parts.map((p) => p.cabinet))];
     return {
       planId: plan.id,
+      buildId: plan.build?.id ?? null,
       buildName: plan.buildName,
       parts,
       sheets,

@@ -7,6 +7,7 @@ import { ButtonLink } from '../../components/ui/button';
 import { Card } from '../../components/ui/card';
 import { paths } from '../../config/paths';
 import { checklistQueryOptions, useChecklist } from '../../features/checklist/api/checklist';
+import { BuildFiles } from '../../features/checklist/components/build-files';
 import { ChecklistView } from '../../features/checklist/components/checklist-view';
 import { parseId } from './params';
 import { useWorkshop } from './workshop';
@@ -39,9 +40,16 @@ export function ChecklistRoute() {
       {list.isPending ? <p className="text-sm text-zinc-500">Loading the checklist…</p> : null}
       {list.isError ? <p className="text-sm text-red-700">{list.error.message}</p> : null}
       {list.data ? <ChecklistView workshopId={workshopId} list={list.data} canTick={canTick} /> : null}
-      <Card title="History" className="mt-8 max-w-3xl">
-        <HistoryList workshopId={workshopId} subjectType="plan" subjectId={planId} limit={12} />
-      </Card>
+      <div className="mt-8 grid gap-6 lg:grid-cols-2">
+        {list.data?.buildId ? (
+          <Card title="Photos and files of this build">
+            <BuildFiles workshopId={workshopId} buildId={list.data.buildId} canUpload={can(membership.role, 'uploadFiles')} />
+          </Card>
+        ) : null}
+        <Card title="History">
+          <HistoryList workshopId={workshopId} subjectType="plan" subjectId={planId} limit={12} />
+        </Card>
+      </div>
     </>
   );
 }

@@ -40,7 +40,7 @@ export function AppLayout({
               <span className="truncate text-sm font-bold text-zinc-800" data-testid="workshop-name">
                 {workshopName}
               </span>
-              {roleLabel ? <span className="text-xs text-zinc-500">· {roleLabel}</span> : null}
+              {roleLabel ? <span className="text-xs whitespace-nowrap text-zinc-500">· {roleLabel}</span> : null}
               {switchWorkshopHref ? (
                 <Link to={switchWorkshopHref} className="text-xs text-accent-700 hover:underline">
                   Switch
