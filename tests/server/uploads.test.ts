@@ -71,6 +71,9 @@ describe('uploads', () => {
     expect(file.headers['content-disposition']).toMatch(/^inline; filename="front view.png"/);
     const list = await maker.get(`${base()}?buildId=1`).expect(200);
     expect(list.body.items.map((u: { id: number }) => u.id)).toContain(res.body.id);
+    const noBuild = await upload(maker, 'photo', png, 'x.png', '?buildId=999');
+    expect(noBuild.status).toBe(400);
+    expect(noBuild.body.error.fields).toEqual({ buildId: 'no such build in this workshop' });
   });
 
   it('a JPEG named .txt is a JPEG; a PNG renamed .jpg stays a PNG: the content decides', async () => {

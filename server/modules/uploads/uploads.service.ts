@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { DriverParamsDto, UploadDto, UploadKind } from '../../../shared/schemas/api.schema.js';
 import { AppError } from '../../errors.js';
+import { Build } from '../builds/build.entity.js';
 import { newStorageKey, type FileStorage } from '../../storage/storage.js';
 import type { StockService } from '../stock/stock.service.js';
 import { problemsMessage, problemsToFields } from './csv-table.js';
@@ -68,6 +69,9 @@ export class UploadsService {
     byEmail: string,
   ): Promise<UploadDto & { imported?: number; drivers?: DriverParamsDto[] }> {
     if (!file || file.buffer.length === 0) throw AppError.invalid('Choose a file to upload.', { file: 'choose a file' });
+    if (subject?.type === 'build' && (await this.em.count(Build, { id: subject.id, workshop: workshopId })) === 0) {
+      throw AppError.invalid('buildId: no such build in this workshop', { buildId: 'no such build in this workshop' });
+    }
     if (file.buffer.length > UPLOAD_LIMITS[kind]) throw tooLarge(kind);
     const sniffed = kind === 'photo' ? await sniffPhoto(file.buffer) : await sniffCsv(file.buffer);
     if (!sniffed.ok) throw unsupported(sniffed.reason);
