@@ -10,8 +10,7 @@ import { Build } from '../../server/modules/builds/build.entity.js';
 import { CutPlansService } from '../../server/modules/cut-plans/cut-plans.service.js';
 import { StockService } from '../../server/modules/stock/stock.service.js';
 import { DEMO_BUILD_NAME } from '../../server/seed.js';
-import type { Agent, TestApp } from './helpers.js';
-import { DEMO } from './helpers.js';
+import { buildTestApp, DEMO, signIn, type Agent, type TestApp } from './helpers.js';
 
 /** The stock of PRODUCT.md §9: 18 mm MDF sheets 2440 × 1220 and a 1200 mm roll of 50 mm polyester batt. */
 export const DEMO_SHEET: StockInput = { kind: 'sheet', material: 'MDF', thicknessMm: 18, widthMm: 2440, heightMm: 1220, quantity: null, cost: 42, grain: 'none' };
@@ -60,3 +59,24 @@ export async function pollJob(agent: Agent, workshopId: number, id: string, unti
 }
 
 export const finished = (d: NestJobDto) => d.status === 'done' || d.status === 'failed' || d.status === 'cancelled';
+
+export interface DemoPlanSetup {
+  t: TestApp;
+  maker: Agent;
+  viewer: Agent;
+  workshopId: number;
+  buildId: number;
+  /** The demo stock added to the room: 18 mm sheet, 25 mm sheet, lining roll. */
+  stockIds: number[];
+}
+
+/** A test app with the maker and viewer signed in, the demo build, and the demo stock added (ids known). */
+export async function demoPlanSetup(): Promise<DemoPlanSetup> {
+  const t = await buildTestApp();
+  const maker = await signIn(t.app, DEMO.maker);
+  const viewer = await signIn(t.app, DEMO.viewer);
+  const workshopId = await demoWorkshopId(maker);
+  const buildId = await demoBuildId(t, workshopId);
+  const stockIds = await addStock(t, workshopId, [DEMO_SHEET, BAFFLE_SHEET, DEMO_ROLL]);
+  return { t, maker, viewer, workshopId, buildId, stockIds };
+}

@@ -9,8 +9,8 @@ import { DEMO_BOOKSHELF, DEMO_FLOORSTANDER } from '../../shared/demo/designs.js'
 import { validateLayout } from '../../shared/nesting/index.js';
 import type { CutPlanDto, StockInput } from '../../shared/schemas/api.schema.js';
 import { groupJobs } from '../../server/modules/cut-plans/assemble.js';
-import { addStock, BAFFLE_SHEET, DEMO_ROLL, DEMO_SHEET, demoBuildId, demoWorkshopId, makeCutPlan } from './cut-plans.helpers.js';
-import { buildTestApp, DEMO, signIn, signUp, type Agent, type TestApp } from './helpers.js';
+import { BAFFLE_SHEET, DEMO_ROLL, DEMO_SHEET, demoPlanSetup, makeCutPlan } from './cut-plans.helpers.js';
+import { signUp, type Agent, type TestApp } from './helpers.js';
 
 let t: TestApp;
 let maker: Agent;
@@ -21,12 +21,7 @@ let stockIds: number[];
 let plan: CutPlanDto;
 
 beforeAll(async () => {
-  t = await buildTestApp();
-  maker = await signIn(t.app, DEMO.maker);
-  viewer = await signIn(t.app, DEMO.viewer);
-  workshopId = await demoWorkshopId(maker);
-  buildId = await demoBuildId(t, workshopId);
-  stockIds = await addStock(t, workshopId, [DEMO_SHEET, BAFFLE_SHEET, DEMO_ROLL]);
+  ({ t, maker, viewer, workshopId, buildId, stockIds } = await demoPlanSetup());
   const id = await makeCutPlan(t, workshopId, buildId, { stockIds, timeLimitMs: 600 });
   plan = (await maker.get(`/api/workshops/${workshopId}/cut-plans/${id}`).expect(200)).body;
 });

@@ -18,8 +18,8 @@ import { DEMO_BOOKSHELF } from '../../shared/demo/designs.js';
 import { buildStencilDocument, layoutStencils, PT_PER_MM, stencilItemsFromBuild } from '../../shared/render/index.js';
 import type { CutPlanDto } from '../../shared/schemas/api.schema.js';
 import { CutPlansService } from '../../server/modules/cut-plans/cut-plans.service.js';
-import { addStock, BAFFLE_SHEET, DEMO_ROLL, DEMO_SHEET, demoBuildId, demoWorkshopId, makeCutPlan } from './cut-plans.helpers.js';
-import { buildTestApp, DEMO, signIn, signUp, type Agent, type TestApp } from './helpers.js';
+import { demoPlanSetup, makeCutPlan } from './cut-plans.helpers.js';
+import { signUp, type Agent, type TestApp } from './helpers.js';
 
 const OUT_DIR = path.resolve('.tmp', 'exports');
 
@@ -30,12 +30,9 @@ let workshopId: number;
 let plan: CutPlanDto;
 
 beforeAll(async () => {
-  t = await buildTestApp();
-  maker = await signIn(t.app, DEMO.maker);
-  viewer = await signIn(t.app, DEMO.viewer);
-  workshopId = await demoWorkshopId(maker);
-  const buildId = await demoBuildId(t, workshopId);
-  const stockIds = await addStock(t, workshopId, [DEMO_SHEET, BAFFLE_SHEET, DEMO_ROLL]);
+  let buildId: number;
+  let stockIds: number[];
+  ({ t, maker, viewer, workshopId, buildId, stockIds } = await demoPlanSetup());
   const id = await makeCutPlan(t, workshopId, buildId, { stockIds, timeLimitMs: 600 });
   plan = (await maker.get(`/api/workshops/${workshopId}/cut-plans/${id}`).expect(200)).body;
   mkdirSync(OUT_DIR, { recursive: true });
@@ -45,10 +42,11 @@ afterAll(async () => t.close());
 const exportPath = (file: string, id = plan.id) => `/api/workshops/${workshopId}/cut-plans/${id}/exports/${file}`;
 
 /** supertest: collect a binary body as a Buffer. */
-function binary(res: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void): void {
+function binary(res: request.Response, cb: (err: Error | null, body: Buffer) => void): void {
+  const stream = res as unknown as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => cb(null, Buffer.concat(chunks)));
 }
 
 /** The file name of an attachment (RFC 6266: a token, or a quoted string). */

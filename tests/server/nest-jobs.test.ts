@@ -10,8 +10,8 @@ import type { CutPlanDto, NestJobDto } from '../../shared/schemas/api.schema.js'
 import { groupJobs } from '../../server/modules/cut-plans/assemble.js';
 import { CutPlan } from '../../server/modules/cut-plans/cut-plan.entity.js';
 import { closeNestPool } from '../../server/workers/pool.js';
-import { addStock, BAFFLE_SHEET, DEMO_ROLL, DEMO_SHEET, demoBuildId, demoWorkshopId, finished, pollJob } from './cut-plans.helpers.js';
-import { buildTestApp, DEMO, signIn, signUp, type Agent, type TestApp } from './helpers.js';
+import { demoPlanSetup, finished, pollJob } from './cut-plans.helpers.js';
+import { DEMO, signUp, type Agent, type TestApp } from './helpers.js';
 
 let t: TestApp;
 let maker: Agent;
@@ -21,12 +21,7 @@ let buildId: number;
 let stockIds: number[];
 
 beforeAll(async () => {
-  t = await buildTestApp();
-  maker = await signIn(t.app, DEMO.maker);
-  viewer = await signIn(t.app, DEMO.viewer);
-  workshopId = await demoWorkshopId(maker);
-  buildId = await demoBuildId(t, workshopId);
-  stockIds = await addStock(t, workshopId, [DEMO_SHEET, BAFFLE_SHEET, DEMO_ROLL]);
+  ({ t, maker, viewer, workshopId, buildId, stockIds } = await demoPlanSetup());
 });
 afterAll(async () => {
   await closeNestPool();

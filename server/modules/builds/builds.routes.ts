@@ -1,15 +1,8 @@
 import { Router } from 'express';
-import { ZodError } from 'zod';
 import { buildUpdateInput } from '../../../shared/schemas/api.schema.js';
 import { accessOf, idParam, requireRole, requireUser, userOf, type RoleLookup } from '../../middleware/auth.js';
+import { parseVersionedBody } from '../../middleware/versioned-body.js';
 import type { BuildsService } from './builds.service.js';
-
-/** The update body is `{version, build}`; build errors use the same paths as on create (`items[0].quantity`). */
-function parseUpdate(body: unknown) {
-  const result = buildUpdateInput.safeParse(body);
-  if (result.success) return result.data;
-  throw new ZodError(result.error.issues.map((issue) => (issue.path[0] === 'build' ? { ...issue, path: issue.path.slice(1) } : issue)));
-}
 
 /** `/api/workshops/:wid/builds` — members read; owners and designers write. */
 export function buildRoutes(builds: BuildsService, lookup: RoleLookup): Router {
@@ -32,7 +25,8 @@ export function buildRoutes(builds: BuildsService, lookup: RoleLookup): Router {
 
   router.put('/:id', edit, async (req, res) => {
     const id = idParam(req, 'id');
-    const { version, build } = parseUpdate(req.body);
+    // `{version, build}`: build errors use the same paths as on create (`items[0].quantity`).
+    const { version, build } = parseVersionedBody(buildUpdateInput, req.body, 'build');
     res.json(await builds.update(accessOf(res).workshopId, id, version, build, userOf(req).email));
   });
 

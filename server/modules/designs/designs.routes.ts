@@ -1,18 +1,8 @@
 import { Router } from 'express';
-import { ZodError } from 'zod';
 import { designCreateInput, designUpdateInput } from '../../../shared/schemas/api.schema.js';
 import { accessOf, idParam, requireRole, requireUser, userOf, type RoleLookup } from '../../middleware/auth.js';
+import { parseVersionedBody } from '../../middleware/versioned-body.js';
 import type { DesignsService } from './designs.service.js';
-
-/**
- * The update body is `{version, design}`; its design errors are reported with the same paths as on create
- * (`outer.width`, not `design.outer.width`) so one form maps both.
- */
-function parseUpdate(body: unknown) {
-  const result = designUpdateInput.safeParse(body);
-  if (result.success) return result.data;
-  throw new ZodError(result.error.issues.map((issue) => (issue.path[0] === 'design' ? { ...issue, path: issue.path.slice(1) } : issue)));
-}
 
 /** `/api/workshops/:wid/designs` — members read; owners and designers write. */
 export function designRoutes(designs: DesignsService, lookup: RoleLookup): Router {
@@ -36,7 +26,8 @@ export function designRoutes(designs: DesignsService, lookup: RoleLookup): Route
 
   router.put('/:id', edit, async (req, res) => {
     const id = idParam(req, 'id');
-    const { version, design } = parseUpdate(req.body);
+    // `{version, design}`: design errors use the same paths as on create (`outer.width`, not `design.outer.width`).
+    const { version, design } = parseVersionedBody(designUpdateInput, req.body, 'design');
     res.json(await designs.update(accessOf(res).workshopId, id, version, design, userOf(req).email));
   });
 
