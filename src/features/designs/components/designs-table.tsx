@@ -13,6 +13,7 @@ import type { DesignSummaryDto } from '../../../../shared/schemas/api.schema';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/dialog';
 import { Input } from '../../../components/ui/field';
+import { SortableTableHead } from '../../../components/ui/table-head';
 import { cn } from '../../../lib/cn';
 import { formatDateTime, formatRelativeTime, formatSizeMm } from '../../../lib/format';
 import { notify } from '../../../lib/notify';
@@ -161,42 +162,7 @@ export function DesignsTable({
       </div>
       <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
         <table className="w-full text-sm" data-testid="designs-table">
-          <thead className="border-b border-zinc-200 bg-zinc-50 text-left text-[13px] text-zinc-500">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const numeric = (header.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                      className={cn('px-5 py-2.5 font-normal whitespace-nowrap', numeric && 'text-right')}
-                    >
-                      {header.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className={cn(
-                            'inline-flex items-center gap-1 rounded hover:text-zinc-900',
-                            sorted && 'text-zinc-900',
-                          )}
-                        >
-                          {flexRender(header.column.columnDef.header, header.getContext())}
-                          <span aria-hidden="true" className="w-3 text-xs text-zinc-400">
-                            {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
-                          </span>
-                        </button>
-                      ) : (
-                        flexRender(header.column.columnDef.header, header.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
+          <SortableTableHead table={table} />
           <tbody className="divide-y divide-zinc-100">
             {rows.map((row) => (
               <tr key={row.id} className="hover:bg-zinc-50/70" data-testid="design-row">

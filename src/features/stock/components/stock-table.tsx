@@ -13,6 +13,7 @@ import { HistoryList } from '../../../components/history/history-list';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/dialog';
 import { Input } from '../../../components/ui/field';
+import { isNumericColumn, SortableTableHead } from '../../../components/ui/table-head';
 import { cn } from '../../../lib/cn';
 import { formatNumber, formatRelativeTime } from '../../../lib/format';
 import { useDeleteStockItem } from '../api/stock';
@@ -140,33 +141,13 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
       </div>
       <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
         <table className="w-full text-sm" data-testid="stock-table">
-          <thead className="border-b border-zinc-200 bg-zinc-50 text-left text-[13px] text-zinc-500">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  const numeric = (h.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
-                  return (
-                    <th key={h.id} scope="col" aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined} className={cn('px-4 py-2.5 font-normal whitespace-nowrap', numeric && 'text-right')}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className={cn('hover:text-zinc-900', sorted && 'text-zinc-900')}>
-                          {flexRender(h.column.columnDef.header, h.getContext())} <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
+          <SortableTableHead table={table} cellClassName="px-4 py-2.5" />
           <tbody className="divide-y divide-zinc-100">
             {rows.map((row) => (
               <Fragment key={row.id}>
                 <tr className="hover:bg-zinc-50/70" data-testid="stock-row">
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className={cn('px-4 py-2.5 text-zinc-700', (cell.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric && 'text-right tabular-nums')}>
+                    <td key={cell.id} className={cn('px-4 py-2.5 text-zinc-700', isNumericColumn(cell.column.columnDef.meta) && 'text-right tabular-nums')}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}
