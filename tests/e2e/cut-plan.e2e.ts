@@ -101,6 +101,29 @@ const tests: E2ETest[] = [
       await ctx.screenshot('cut-plan-viewer-warnings');
     },
   },
+  {
+    name: 'a designer makes a build with a mirrored pair; an odd quantity is named before saving',
+    async run(ctx) {
+      const page = await ctx.page();
+      await ctx.signIn(page, DEMO.designer);
+      await page.getByRole('link', { name: 'Builds', exact: true }).click();
+      await page.getByRole('button', { name: 'New build' }).click();
+      const dialog = page.getByRole('dialog', { name: 'New build' });
+      await dialog.getByLabel('Name').fill('Study pair');
+      const line = dialog.getByTestId('build-line').first();
+      await line.getByLabel('Design').selectOption({ label: 'Harbour bookshelf (two-way, rear port)' });
+      await line.getByLabel('Quantity').fill('3');
+      await line.getByLabel(/^Mirrored pair/).check();
+      await dialog.getByRole('button', { name: 'Create build' }).click();
+      await dialog.getByText('a mirrored pair needs an even quantity (a pair is 2)').waitFor();
+      await ctx.screenshot('build-dialog-odd-pair');
+      await line.getByLabel('Quantity').fill('2');
+      await dialog.getByRole('button', { name: 'Create build' }).click();
+      await page.waitForURL(/\/builds\/\d+$/);
+      await page.getByRole('heading', { name: 'Study pair' }).waitFor();
+      await page.getByText('Harbour bookshelf (two-way, rear port) × 2 (mirrored pair)').waitFor();
+    },
+  },
 ];
 
 export default tests;

@@ -72,7 +72,7 @@ export function BuildDialog({
         <fieldset className="space-y-2">
           <legend className="mb-1 text-[13px] text-zinc-600">Cabinets</legend>
           {items.fields.map((field, i) => (
-            <div key={field.id} className="grid grid-cols-[1fr_6rem_auto_auto] items-start gap-2 rounded-lg border border-zinc-200 p-2" data-testid="build-line">
+            <div key={field.id} className="grid grid-cols-[1fr_6rem] items-start gap-x-2 gap-y-1 rounded-lg border border-zinc-200 p-2" data-testid="build-line">
               <Field label="Design" error={errors.items?.[i]?.designId?.message}>
                 {({ id, invalid }) => (
                   <Select id={id} invalid={invalid} {...register(`items.${i}.designId`, { valueAsNumber: true })}>
@@ -87,10 +87,8 @@ export function BuildDialog({
               <Field label="Quantity" error={errors.items?.[i]?.quantity?.message}>
                 {({ id, invalid }) => <Input id={id} invalid={invalid} {...numberInput(register, `items.${i}.quantity`, 1)} min={1} />}
               </Field>
-              <div className="pt-7">
-                <Checkbox label="Mirrored pair" title="Half of these cabinets are the mirror image (left and right of a pair)" {...register(`items.${i}.mirroredPair`)} />
-              </div>
-              <div className="pt-6">
+              <div className="col-span-2 flex items-center justify-between gap-2">
+                <Checkbox label="Mirrored pair (half of them the mirror image)" {...register(`items.${i}.mirroredPair`)} />
                 <Button size="sm" variant="ghost" aria-label={`Remove line ${i + 1}`} onClick={() => items.remove(i)} disabled={items.fields.length === 1}>
                   Remove
                 </Button>

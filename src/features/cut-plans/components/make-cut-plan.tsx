@@ -8,6 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { Checkbox, Field, Input, Select } from '../../../components/ui/field';
 import { Spinner } from '../../../components/ui/spinner';
+import { isApiError } from '../../../lib/api-client';
 import { applyApiError } from '../../../lib/form-errors';
 import { formatNumber } from '../../../lib/format';
 import { numberInput } from '../../../lib/number-input';
@@ -22,6 +23,9 @@ const formSchema = cutPlanSettingsInput.omit({ timeLimitMs: true, stockIds: true
   typedStock: cutPlanSettingsInput.shape.typedStock.unwrap().optional(),
 });
 type FormInput = z.input<typeof formSchema>;
+
+/** Settings with an input of their own in this form (other field errors are shown at the top). */
+const FORM_FIELDS = new Set(['kerfMm', 'trimMm', 'mode', 'minOffcutMm', 'typedStock']);
 
 /** Typed-in stock starts as the usual sheet and lining roll (PRODUCT.md §9). */
 const TYPED_DEFAULTS: StockInput[] = [
@@ -99,7 +103,10 @@ export function MakeCutPlan({ workshopId, buildId, canReadStock, onDone }: { wor
       const created = await start.mutateAsync({ buildId, settings });
       setJobId(created.id);
     } catch (error) {
-      applyApiError(error, setError, { stripPrefix: 'settings' });
+      const messages = applyApiError(error, setError, { stripPrefix: 'settings' });
+      // Problems of the build itself (a deleted design) or of the stock choice have no input here: say them on top.
+      const elsewhere = messages.filter((m) => !FORM_FIELDS.has(m.formPath.split('.')[0]!) || m.formPath.startsWith('stockIds'));
+      if (elsewhere.length > 0 && isApiError(error)) setError('root.server', { type: 'server', message: error.message });
     }
   });
 
