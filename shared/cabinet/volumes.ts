@@ -71,13 +71,19 @@ export function computeVolumes(design: Design, frame: Frame, lining: LiningTotal
     netLitres: net,
   };
   if (design.lining && lining.massKg > 0 && net > 0) {
-    // Estimate (Leach model, REFERENCES.md §5): the box of air + fibre, net + fibre volume, with the lining's mass.
+    // Estimate (Leach model, REFERENCES.md §5), applied only to the layer the lining fills: the air inside
+    // the batt is pushed towards isothermal compression, the open air in the middle of the box stays
+    // adiabatic. Compliances of the two parts add, so their apparent volumes add.
+    const layerLitres = Math.min(lining.volumeLitres, net + fibre);
+    const openAirLitres = net + fibre - layerLitres;
     volumes.apparentLitresEstimate =
+      openAirLitres +
       apparentVolumeLeachM3({
-        boxVolumeM3: (net + fibre) / 1000,
+        boxVolumeM3: layerLitres / 1000,
         fillMassKg: lining.massKg,
         airDensityKgM3: airDensityKgM3(design.airTemperatureC),
-      }) * 1000;
+      }) *
+        1000;
   }
   return volumes;
 }

@@ -44,6 +44,20 @@ describe('volumes (PRODUCT §3)', () => {
     // no lining → no estimate
     expect(mustPlan(plainBox()).volumes.apparentLitresEstimate).toBeUndefined();
   });
+
+  it('only the lined layer gains: the open air in the middle of the box stays adiabatic', () => {
+    // Leach model applied to the lining layer only (REFERENCES §5). A thin lining in a large box gains
+    // little, as reported for wall linings in vented boxes (REFERENCES §5, common practice).
+    const big = mustPlan(
+      plainBox({ outer: { width: 500, height: 800, depth: 500 }, lining: { thickness: 10, faces: ['left', 'right', 'top', 'bottom', 'back'] } }),
+    ).volumes;
+    const gain = big.apparentLitresEstimate! / big.netLitres - 1;
+    expect(gain).toBeGreaterThan(0);
+    expect(gain).toBeLessThan(0.1);
+    // the gain of the layer never exceeds γ − 1 = 0.4 of the layer's own volume (adiabatic → isothermal limit)
+    const plan = mustPlan(DEMO_BOOKSHELF);
+    expect(plan.volumes.apparentLitresEstimate! - plan.volumes.netLitres).toBeLessThan(0.4 * plan.lining!.volumeLitres);
+  });
 });
 
 describe('port tuning in the plan', () => {
