@@ -1,9 +1,9 @@
 /**
  * Guillotine cut order and offcuts of one packed sheet, derived from the placements (inflated
  * coordinates, see bins.ts). A piece is split by edge-to-edge cuts that cross no part: first any
- * empty band along the piece's side is cut off whole (largest first, so offcuts stay large), then
- * the piece is cut into strips in one direction (rip cuts first), and each strip is processed the
- * same way. A layout that is not guillotine-cuttable returns null.
+ * empty band along the piece's side is cut off whole (largest first, so offcuts stay large), else
+ * one cut between parts (rip cuts first), and both pieces are processed the same way (depth first:
+ * the cut order a panel saw follows). A layout that is not guillotine-cuttable returns null.
  */
 import type { Cut, Offcut } from '../schemas/nest.schema.js';
 import { EPS, MaxRectsBin, Candidate, type Placed } from './bins.js';
@@ -124,7 +124,8 @@ export function planGuillotineCuts(placements: Placed[], f: SheetFrame): CutPlan
       continue;
     }
     if (parts.length === 1) continue; // the part is cut to size
-    // 2. Strips in one direction, rip cuts preferred.
+    // 2. One cut across the piece, rip cuts preferred, nearest the piece's origin side first. One
+    //    cut at a time (not all strips at once) lets each remainder lose its empty band whole.
     let vertical = ripVertical;
     let positions = cutPositions(parts, vertical, vertical ? piece.x0 : piece.y0, vertical ? piece.x1 : piece.y1);
     if (positions.length === 0) {
@@ -132,9 +133,10 @@ export function planGuillotineCuts(placements: Placed[], f: SheetFrame): CutPlan
       positions = cutPositions(parts, vertical, vertical ? piece.x0 : piece.y0, vertical ? piece.x1 : piece.y1);
     }
     if (positions.length === 0) return null;
-    for (const c of positions) addCut(vertical, c, piece);
-    const strips = split(piece, vertical, positions);
-    for (let i = strips.length - 1; i >= 0; i--) stack.push(strips[i]!);
+    const at = positions[0]!;
+    addCut(vertical, at, piece);
+    const [lower, upper] = split(piece, vertical, [at]);
+    stack.push(upper!, lower!);
   }
   offcuts.sort((a, b) => b.width * b.height - a.width * a.height);
   return { cuts, offcuts };

@@ -164,7 +164,8 @@ export function nest(job: NestJob, options: NestOptions = {}): Layout {
     const started = now ? now() : 0;
     const doneItems = totalItems - itemsLeft;
     let budget!: Budget;
-    budget = new Budget(Math.max(0, share), now, shouldStop, undefined, () =>
+    // 90 % of the share for the search; the rest covers bounds, cut plans and offcuts.
+    budget = new Budget(Math.max(0, 0.9 * share), now, shouldStop, undefined, () =>
       report((doneItems + pr.items.length * budget.fraction()) / Math.max(1, totalItems), 'searching'),
     );
     const ctxFor = (lb: number, roll: boolean): SearchContext => ({

@@ -157,9 +157,16 @@ function mutate(rng: Rng, seq: Int32Array, leftover: readonly number[]): void {
   }
 }
 
+export interface FixedResult {
+  /** A packing with every item placed, or null. */
+  found: Packing | null;
+  /** The packing with the least area left over. */
+  best: Packing;
+}
+
 /**
- * Searches orderings that pack every item into the fixed bins. Returns the packing, or null when the
- * budget (or `maxStale` non-improving steps) runs out first.
+ * Searches orderings that pack every item into the fixed bins. Stops when everything fits, or when
+ * the budget (or `maxStale` non-improving steps) runs out.
  */
 export function packIntoFixed(
   pr: Problem,
@@ -169,11 +176,12 @@ export function packIntoFixed(
   ctx: SearchContext,
   heightOverride?: number,
   maxStale = Infinity,
-): Packing | null {
+): FixedResult {
   const { rng, budget } = ctx;
   let seq = start.slice();
   let cur = decode(pr, seq, opts, fixed, undefined, heightOverride);
-  if (cur.leftover.length === 0) return cur;
+  if (cur.leftover.length === 0) return { found: cur, best: cur };
+  let best = cur;
   let bestCost = cur.leftoverArea;
   let bestSeq = seq.slice();
   let stale = 0;
@@ -187,7 +195,7 @@ export function packIntoFixed(
     const next = seq.slice();
     mutate(rng, next, cur.leftover);
     const p = decode(pr, next, o, fixed, undefined, heightOverride);
-    if (p.leftover.length === 0) return p;
+    if (p.leftover.length === 0) return { found: p, best: p };
     iter++;
     const ok = p.leftoverArea <= cur.leftoverArea + 1e-9 || (hist !== null && p.leftoverArea <= hist[iter % hist.length]! + 1e-9);
     if (ok) {
@@ -197,6 +205,7 @@ export function packIntoFixed(
     if (hist) hist[iter % hist.length] = cur.leftoverArea;
     if (ok && p.leftoverArea < bestCost - 1e-9) {
       bestCost = p.leftoverArea;
+      best = p;
       bestSeq = seq.slice();
       stale = 0;
       sinceRestart = 0;
@@ -204,7 +213,7 @@ export function packIntoFixed(
     }
     stale++;
     sinceRestart++;
-    if (stale > maxStale) return null;
+    if (stale > maxStale) return { found: null, best };
     if (sinceRestart > 50 + tuning.restartFactor * pr.items.length) {
       // Restart from the best ordering (or a shuffled one) with another placement rule.
       sinceRestart = 0;
@@ -214,11 +223,24 @@ export function packIntoFixed(
       } else seq = bestSeq.slice();
       o = { ...o, rule: rules[randomInt(rng, rules.length)]! };
       cur = decode(pr, seq, o, fixed, undefined, heightOverride);
-      if (cur.leftover.length === 0) return cur;
+      if (cur.leftover.length === 0) return { found: cur, best: cur };
       if (hist) hist.fill(cur.leftoverArea);
     }
   }
-  return null;
+  return { found: null, best };
+}
+
+/**
+ * A packing into the fixed bins with items left over, completed by one more bin of type `t` that
+ * takes every leftover item; null when they do not all fit. With the leftover area minimised, the
+ * extra bin holds as little as possible: the waste gathers in one large offcut.
+ */
+function completeWithExtra(pr: Problem, partial: Packing, t: number, opts: DecodeOptions): Packing | null {
+  if (partial.leftover.length === 0) return partial;
+  const order = Int32Array.from([...partial.leftover].sort((a, b) => pr.items[b]!.area - pr.items[a]!.area || a - b));
+  const extra = decode(pr, order, { ...opts, rule: RULE_BL }, [t]);
+  if (extra.leftover.length > 0) return null;
+  return compact({ bins: [...partial.bins, ...extra.bins], binTypes: [...partial.binTypes, t], leftover: [], leftoverArea: 0 });
 }
 
 /** Sheets, remnants and fixed-length rolls: fewest sheets (or lowest cost). */
@@ -227,13 +249,16 @@ export function solveBins(pr: Problem, ctx: SearchContext): Packing {
   let best: Packing | null = null;
   let bestOpts: DecodeOptions = { rule: RULE_BSSF, split: SPLIT_SHORTER_LEFTOVER, bestFit: false };
   const orders = startOrders(pr);
-  const done = () => best !== null && (primaryOf(pr, best) <= ctx.lowerBound || budget.expired());
+  // At the bound the count cannot improve; a few more starts may still give a larger offcut.
+  let tried = 0;
+  const done = () => best !== null && (budget.expired() || (primaryOf(pr, best) <= ctx.lowerBound && tried >= 24));
   outer: for (const order of orders) {
     for (const rule of ruleSet(pr)) {
       for (const split of splitSet(pr)) {
         for (const bestFit of [false, true]) {
           const opts = { rule, split, bestFit };
           const p = decode(pr, order, opts, null);
+          tried++;
           if (best === null || compareBins(pr, p, best) < 0) {
             best = p;
             bestOpts = opts;
@@ -245,12 +270,14 @@ export function solveBins(pr: Problem, ctx: SearchContext): Packing {
     }
   }
   let cur = compact(best!);
-  while (!budget.expired() && cur.leftover.length === 0 && primaryOf(pr, cur) > ctx.lowerBound) {
-    // Drop the weakest counted sheet (lowest fill) and try to fit everything on the rest.
+  // Drop the weakest counted sheet (lowest fill) and try to fit everything on the rest. When that
+  // fails (or the bound is already reached), the closest attempt plus one sheet often leaves a
+  // larger offcut: keep it if it is better by compareBins.
+  const weakestOf = (p: Packing): number => {
     let weakest = -1;
     let weakestFill = Infinity;
-    cur.bins.forEach((bin, b) => {
-      const t = pr.types[cur.binTypes[b]!]!;
+    p.bins.forEach((bin, b) => {
+      const t = pr.types[p.binTypes[b]!]!;
       if (pr.objective === 'sheets' && t.kind === 'remnant') return;
       const fill = bin.usedArea / (t.W * t.H);
       if (fill < weakestFill) {
@@ -258,21 +285,34 @@ export function solveBins(pr: Problem, ctx: SearchContext): Packing {
         weakest = b;
       }
     });
+    return weakest;
+  };
+  const startFor = (p: Packing, weakest: number): Int32Array => {
+    if (!tuning.startFromBest) return orders[0]!;
+    // Items of the weakest sheet first, then the others sheet by sheet.
+    const seq: number[] = p.bins[weakest]!.placements.map((x) => x.item);
+    p.bins.forEach((bin, b) => {
+      if (b !== weakest) for (const x of bin.placements) seq.push(x.item);
+    });
+    return Int32Array.from(seq);
+  };
+  const fixedOpts = { ...bestOpts, bestFit: tuning.fixedBestFit };
+  let atBound = primaryOf(pr, cur) <= ctx.lowerBound;
+  while (!budget.expired() && cur.leftover.length === 0 && cur.bins.length > 1) {
+    const weakest = weakestOf(cur);
     if (weakest < 0) break;
     const target = cur.binTypes.filter((_, b) => b !== weakest);
-    let start = orders[0]!;
-    if (tuning.startFromBest) {
-      // Items of the weakest sheet first, then the others sheet by sheet.
-      const seq: number[] = cur.bins[weakest]!.placements.map((p) => p.item);
-      cur.bins.forEach((bin, b) => {
-        if (b !== weakest) for (const p of bin.placements) seq.push(p.item);
-      });
-      start = Int32Array.from(seq);
+    // At the bound only the offcut can improve: a short search.
+    const r = packIntoFixed(pr, target, startFor(cur, weakest), fixedOpts, ctx, undefined, atBound ? 50 + 2 * pr.items.length : Infinity);
+    if (r.found) {
+      cur = compact(r.found);
+      ctx.onImprove?.(primaryOf(pr, cur));
+      atBound = primaryOf(pr, cur) <= ctx.lowerBound;
+      continue;
     }
-    const found = packIntoFixed(pr, target, start, { ...bestOpts, bestFit: tuning.fixedBestFit }, ctx);
-    if (!found) break;
-    cur = compact(found);
-    ctx.onImprove?.(primaryOf(pr, cur));
+    const alt = completeWithExtra(pr, r.best, cur.binTypes[weakest]!, fixedOpts);
+    if (alt && compareBins(pr, alt, cur) < 0) cur = alt;
+    break;
   }
   return cur;
 }
@@ -326,7 +366,7 @@ export function solveStrip(pr: Problem, t: number, ctx: SearchContext): Packing 
   let seed = orders[0]!;
   while (!budget.expired() && bestLen - 1e-9 > ctx.lowerBound) {
     const target = Math.max(ctx.lowerBound, bestLen - step);
-    const p = packIntoFixed(pr, [t], seed, bestOpts, ctx, target, 200 + 4 * pr.items.length);
+    const p = packIntoFixed(pr, [t], seed, bestOpts, ctx, target, 200 + 4 * pr.items.length).found;
     if (p) {
       best = p;
       bestLen = p.bins[0]!.topY();
