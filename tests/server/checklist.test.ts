@@ -30,7 +30,7 @@ beforeAll(async () => {
 afterAll(async () => t.close());
 
 const checklist = async (agent: Agent = maker): Promise<ChecklistDto> => (await agent.get(`/api/workshops/${wid}/cut-plans/${planId}/checklist`).expect(200)).body;
-const tick = (agent: Agent, body: unknown) => agent.post(`/api/workshops/${wid}/cut-plans/${planId}/checklist/ticks`).send(body);
+const tick = (agent: Agent, body: object) => agent.post(`/api/workshops/${wid}/cut-plans/${planId}/checklist/ticks`).send(body);
 const stockItem = async (id: number): Promise<StockItemDto | undefined> =>
   ((await maker.get(`/api/workshops/${wid}/stock`).expect(200)).body.items as StockItemDto[]).find((s) => s.id === id);
 
