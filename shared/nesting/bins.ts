@@ -72,6 +72,10 @@ export interface PackBin {
   freeRects(): [number, number, number, number][];
   /** Highest top edge of any placement (roll length used). */
   topY(): number;
+  /** Widest and tallest free rectangle: a part larger than both cannot fit. */
+  maxFreeW: number;
+  maxFreeH: number;
+  largestFreeArea(): number;
 }
 
 function overlapLength(a0: number, a1: number, b0: number, b1: number): number {
@@ -87,6 +91,8 @@ abstract class BaseBin implements PackBin {
   protected r: number[] = [];
   protected count = 0;
   protected top = 0;
+  maxFreeW = 0;
+  maxFreeH = 0;
 
   constructor(
     readonly width: number,
@@ -95,6 +101,31 @@ abstract class BaseBin implements PackBin {
     protected readonly minSide: number,
   ) {
     this.push(0, 0, width, height);
+    this.maxFreeW = width;
+    this.maxFreeH = height;
+  }
+
+  /** Recomputes maxFreeW / maxFreeH after the free list changed. */
+  protected refreshMax(): void {
+    const r = this.r;
+    let mw = 0;
+    let mh = 0;
+    for (let i = 0; i < this.count; i++) {
+      if (r[4 * i + 2]! > mw) mw = r[4 * i + 2]!;
+      if (r[4 * i + 3]! > mh) mh = r[4 * i + 3]!;
+    }
+    this.maxFreeW = mw;
+    this.maxFreeH = mh;
+  }
+
+  largestFreeArea(): number {
+    const r = this.r;
+    let best = 0;
+    for (let i = 0; i < this.count; i++) {
+      const a = r[4 * i + 2]! * r[4 * i + 3]!;
+      if (a > best) best = a;
+    }
+    return best;
   }
 
   protected push(x: number, y: number, w: number, h: number): void {
@@ -279,6 +310,7 @@ export class MaxRectsBin extends BaseBin {
       if (f[a + 2]! < 0) continue;
       this.push(f[a]!, f[a + 1]!, f[a + 2]!, f[a + 3]!);
     }
+    this.refreshMax();
   }
 }
 
@@ -336,6 +368,7 @@ export class GuillotineBin extends BaseBin {
     const m = this.minSide - EPS;
     if (rightW >= m && rightH >= m && rightW > EPS) this.push(rx + w, ry, rightW, rightH);
     if (topW >= m && topH >= m && topH > EPS) this.push(rx, ry + h, topW, topH);
+    this.refreshMax();
   }
 }
 

@@ -61,8 +61,11 @@ export function decode(
     cand.reset();
     for (let b = 0; b < bins.length; b++) {
       const o = pr.orient[binTypes[b]!]![i]!;
-      if (o & AS_GIVEN) bins[b]!.consider(it.w, it.h, false, rule, cand, b);
-      if (o & TURNED) bins[b]!.consider(it.h, it.w, true, rule, cand, b);
+      const bin = bins[b]!;
+      const mw = bin.maxFreeW + 1e-7;
+      const mh = bin.maxFreeH + 1e-7;
+      if (o & AS_GIVEN && it.w <= mw && it.h <= mh) bin.consider(it.w, it.h, false, rule, cand, b);
+      if (o & TURNED && it.h <= mw && it.w <= mh) bin.consider(it.h, it.w, true, rule, cand, b);
       if (!bestFit && cand.free >= 0) break;
     }
     if (cand.free < 0 && !fixed) {

@@ -23,6 +23,7 @@ import {
 } from './bins.js';
 import type { Budget } from './budget.js';
 import { decode, type DecodeOptions, type Packing } from './decode.js';
+import type { PackBin } from './bins.js';
 import type { Problem } from './problem.js';
 import { randomInt, type Rng } from './rng.js';
 
@@ -33,6 +34,8 @@ export const tuning = {
   restartFactor: 4,
   lahc: 0,
   randomRestart: false,
+  repack: true,
+  repackStale: 0,
 };
 
 export interface SearchContext {
@@ -88,7 +91,8 @@ export function largestFree(p: Packing): number {
   let best = 0;
   for (const bin of p.bins) {
     if (bin.placements.length === 0) continue;
-    for (const [, , w, h] of bin.freeRects()) if (w * h > best) best = w * h;
+    const a = bin.largestFreeArea();
+    if (a > best) best = a;
   }
   return best;
 }
@@ -243,6 +247,106 @@ function completeWithExtra(pr: Problem, partial: Packing, t: number, opts: Decod
   return compact({ bins: [...partial.bins, ...extra.bins], binTypes: [...partial.binTypes, t], leftover: [], leftoverArea: 0 });
 }
 
+/** Packs `items` into the bins of `types` (one or two bins) trying a few orderings and rules. */
+function repackInto(pr: Problem, items: number[], types: number[], opts: DecodeOptions, rng: Rng, tries: number): Packing | null {
+  const it = pr.items;
+  const keyed = (key: (i: number) => number) => Int32Array.from([...items].sort((a, b) => key(b) - key(a) || a - b));
+  const orders = [
+    keyed((i) => it[i]!.area),
+    keyed((i) => it[i]!.h),
+    keyed((i) => it[i]!.w),
+    keyed((i) => Math.max(it[i]!.w, it[i]!.h)),
+  ];
+  const rules = [RULE_BSSF, RULE_BL, RULE_BAF, RULE_CP];
+  for (let k = 0; k < tries; k++) {
+    let order: Int32Array;
+    if (k < orders.length) order = orders[k]!;
+    else {
+      order = orders[randomInt(rng, orders.length)]!.slice();
+      for (let s = 0; s < 2; s++) {
+        const a = randomInt(rng, order.length);
+        const b = randomInt(rng, order.length);
+        const t = order[a]!;
+        order[a] = order[b]!;
+        order[b] = t;
+      }
+    }
+    for (const rule of k < orders.length ? rules : [rules[randomInt(rng, rules.length)]!]) {
+      const p = decode(pr, order, { ...opts, rule, bestFit: false }, types);
+      if (p.leftover.length === 0) return p;
+    }
+  }
+  return null;
+}
+
+/**
+ * Empties the weakest bin item by item: each item moves into another bin (or pair of bins) whose
+ * items, with it, still pack into that bin (or pair). After Lodi, Martello & Vigo's tabu search
+ * neighbourhood (INFORMS J. Computing 11(4):345–357, 1999), without the tabu list.
+ */
+function emptyWeakest(pr: Problem, cur: Packing, weakest: number, opts: DecodeOptions, ctx: SearchContext): Packing {
+  const { rng, budget } = ctx;
+  const bins = cur.bins.slice();
+  const types = cur.binTypes.slice();
+  const items = bins.map((b) => b.placements.map((p) => p.item));
+  const area = (b: number) => types[b] !== undefined ? pr.types[types[b]!]!.W * pr.types[types[b]!]!.H : 0;
+  const free = (b: number) => area(b) - bins[b]!.usedArea;
+  let moved = true;
+  while (moved && items[weakest]!.length > 0 && !budget.expired()) {
+    moved = false;
+    const mine = [...items[weakest]!].sort((a, b) => pr.items[b]!.area - pr.items[a]!.area || a - b);
+    const others = bins.map((_, b) => b).filter((b) => b !== weakest).sort((a, b) => free(b) - free(a) || a - b);
+    for (const i of mine) {
+      const need = pr.items[i]!.area;
+      for (const b of others) {
+        if (free(b) < need - 1e-9) break;
+        const p = repackInto(pr, [...items[b]!, i], [types[b]!], opts, rng, 6);
+        if (p) {
+          bins[b] = p.bins[0]!;
+          items[b]!.push(i);
+          items[weakest] = items[weakest]!.filter((x) => x !== i);
+          moved = true;
+          break;
+        }
+        if (budget.expired()) break;
+      }
+      if (moved || budget.expired()) break;
+      // Pairs of bins with room for it together.
+      for (let x = 0; x < others.length && !moved; x++) {
+        for (let y = x + 1; y < others.length && !moved; y++) {
+          const b1 = others[x]!;
+          const b2 = others[y]!;
+          if (free(b1) + free(b2) < need - 1e-9) continue;
+          const p = repackInto(pr, [...items[b1]!, ...items[b2]!, i], [types[b1]!, types[b2]!], opts, rng, 4);
+          if (p) {
+            bins[b1] = p.bins[0]!;
+            bins[b2] = p.bins[1]!;
+            items[b1] = p.bins[0]!.placements.map((q) => q.item);
+            items[b2] = p.bins[1]!.placements.map((q) => q.item);
+            items[weakest] = items[weakest]!.filter((z) => z !== i);
+            moved = true;
+          }
+          if (budget.expired()) return cur;
+        }
+      }
+      if (moved) break;
+    }
+  }
+  if (items[weakest]!.length > 0) {
+    // Not emptied: repack what is left in the weakest bin.
+    const p = repackInto(pr, items[weakest]!, [types[weakest]!], opts, rng, 1);
+    if (!p) return cur;
+    bins[weakest] = p.bins[0]!;
+  } else {
+    bins[weakest] = makeEmpty(pr, types[weakest]!, opts);
+  }
+  return compact({ bins, binTypes: types, leftover: [], leftoverArea: 0 });
+}
+
+function makeEmpty(pr: Problem, t: number, opts: DecodeOptions): PackBin {
+  return decode(pr, [], opts, [t]).bins[0]!;
+}
+
 /** Sheets, remnants and fixed-length rolls: fewest sheets (or lowest cost). */
 export function solveBins(pr: Problem, ctx: SearchContext): Packing {
   const { budget } = ctx;
@@ -301,6 +405,15 @@ export function solveBins(pr: Problem, ctx: SearchContext): Packing {
   while (!budget.expired() && cur.leftover.length === 0 && cur.bins.length > 1) {
     const weakest = weakestOf(cur);
     if (weakest < 0) break;
+    if (tuning.repack && !atBound) {
+      const e = emptyWeakest(pr, cur, weakest, fixedOpts, ctx);
+      if (e.bins.length < cur.bins.length) {
+        cur = e;
+        ctx.onImprove?.(primaryOf(pr, cur));
+        atBound = primaryOf(pr, cur) <= ctx.lowerBound;
+        continue;
+      }
+    }
     const target = cur.binTypes.filter((_, b) => b !== weakest);
     // At the bound only the offcut can improve: a short search.
     const r = packIntoFixed(pr, target, startFor(cur, weakest), fixedOpts, ctx, undefined, atBound ? 50 + 2 * pr.items.length : Infinity);
