@@ -13,6 +13,7 @@ export class Budget {
   private readonly deadline: number;
   private stopped = false;
   private calls = 0;
+  private lastTick = 0;
   readonly workLimit: number;
   readonly workStart: number;
 
@@ -34,9 +35,17 @@ export class Budget {
     if (this.stopped) return true;
     if (work.n >= this.workLimit) return (this.stopped = true);
     // Called once per decode (tens of microseconds or more), so the clock is read every time.
-    if ((++this.calls & 255) === 0) this.onTick?.();
+    this.calls++;
     if (this.shouldStop?.()) return (this.stopped = true);
-    if (this.now && this.now() >= this.deadline) return (this.stopped = true);
+    if (this.now) {
+      const t = this.now();
+      if (t >= this.deadline) return (this.stopped = true);
+      // Progress about every 100 ms.
+      if (t - this.lastTick >= 100) {
+        this.lastTick = t;
+        this.onTick?.();
+      }
+    } else if ((this.calls & 255) === 0) this.onTick?.();
     return false;
   }
 
