@@ -76,12 +76,13 @@ export function primaryOf(pr: Problem, p: Packing): number {
   return v;
 }
 
+/** Area of new stock used (remnants are to be used up, so they do not count). */
 function stockArea(pr: Problem, p: Packing): number {
   let a = 0;
   for (let b = 0; b < p.bins.length; b++) {
     if (p.bins[b]!.placements.length === 0) continue;
     const t = pr.types[p.binTypes[b]!]!;
-    a += t.W * t.H;
+    if (t.kind !== 'remnant') a += t.W * t.H;
   }
   return a;
 }
@@ -427,7 +428,42 @@ export function solveBins(pr: Problem, ctx: SearchContext): Packing {
     if (alt && compareBins(pr, alt, cur) < 0) cur = alt;
     break;
   }
-  return cur;
+  return pr.types.length > 1 ? downsize(pr, cur, fixedOpts, ctx) : cur;
+}
+
+/**
+ * Several stock sizes: moves a sheet's parts onto a smaller (or, by cost, cheaper) size still in
+ * stock when they fit there, emptiest sheets first; a remnant counts as free.
+ */
+function downsize(pr: Problem, cur: Packing, opts: DecodeOptions, ctx: SearchContext): Packing {
+  const bins = cur.bins.slice();
+  const types = cur.binTypes.slice();
+  const value = (t: number) => {
+    const type = pr.types[t]!;
+    return pr.objective === 'cost' ? type.cost : type.kind === 'remnant' ? 0 : 1;
+  };
+  const area = (t: number) => pr.types[t]!.W * pr.types[t]!.H;
+  const order = bins.map((_, b) => b).sort((a, b) => bins[a]!.usedArea / area(types[a]!) - bins[b]!.usedArea / area(types[b]!) || a - b);
+  for (const b of order) {
+    if (ctx.budget.expired()) break;
+    const items = bins[b]!.placements.map((p) => p.item);
+    const used = (t: number) => types.filter((x) => x === t).length;
+    const better = pr.types
+      .map((_, t) => t)
+      .filter((t) => t !== types[b] && used(t) < pr.types[t]!.available && items.every((i) => pr.orient[t]![i]! !== 0))
+      .filter((t) => value(t) < value(types[b]!) - 1e-9 || (Math.abs(value(t) - value(types[b]!)) <= 1e-9 && area(t) < area(types[b]!)))
+      .sort((x, y) => value(x) - value(y) || area(x) - area(y) || x - y);
+    for (const t of better) {
+      if (area(t) < bins[b]!.usedArea - 1e-9) continue;
+      const p = repackInto(pr, items, [t], opts, ctx.rng, 6);
+      if (p) {
+        bins[b] = p.bins[0]!;
+        types[b] = t;
+        break;
+      }
+    }
+  }
+  return { bins, binTypes: types, leftover: cur.leftover, leftoverArea: cur.leftoverArea };
 }
 
 /** Lower bound on the inflated length of a roll of inflated width W. */

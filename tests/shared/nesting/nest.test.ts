@@ -258,3 +258,27 @@ describe('parseNestJob: clear errors naming the field', () => {
     expect(() => nest(j)).not.toThrow();
   });
 });
+
+describe('nest: several stock sizes', () => {
+  it('a sheet that would be mostly empty moves to a smaller size in stock, and remnants are used up', () => {
+    // Four 1100 × 600 panels fill a 2440 × 1220 sheet two by two; the fifth fits a 1220 × 1220 sheet,
+    // and the small parts a remnant (used before new sheets).
+    const l = nestChecked(
+      job({
+        kerf: 3,
+        mode: 'guillotine',
+        timeLimitMs: 300,
+        stock: [
+          { id: 'big', kind: 'sheet', width: 2440, height: 1220 },
+          { id: 'half', kind: 'sheet', width: 1220, height: 1220 },
+          { id: 'rem', kind: 'remnant', width: 700, height: 500, quantity: 1 },
+        ],
+        parts: [
+          { id: 'a', width: 1100, height: 600, quantity: 5 },
+          { id: 'b', width: 300, height: 200, quantity: 3 },
+        ],
+      }),
+    );
+    expect(l.sheets.map((s) => s.stockId).sort()).toEqual(['big', 'half', 'rem']);
+  });
+});
