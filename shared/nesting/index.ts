@@ -35,7 +35,10 @@ export type ParseResult = { ok: true; job: NestJob } | { ok: false; message: str
 export function parseNestJob(input: unknown): ParseResult {
   const r = nestJobSchema.safeParse(input);
   if (!r.success) {
-    const fields = issuesToFields(r.error.issues.map((i) => ({ path: i.path, message: i.message })));
+    // zod's own wording for a missing field ("expected array, received undefined") becomes "is required".
+    const fields = issuesToFields(
+      r.error.issues.map((i) => ({ path: i.path, message: /received undefined$/.test(i.message) ? `${String(i.path.at(-1) ?? 'value')} is required` : i.message })),
+    );
     return { ok: false, message: describeFields(fields), fields };
   }
   const job = r.data;

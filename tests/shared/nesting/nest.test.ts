@@ -242,6 +242,7 @@ describe('parseNestJob: clear errors naming the field', () => {
     ['parts[0].width', { ...ok, parts: [{ id: 'p', width: 0, height: 10 }] }, /greater than 0/],
     ['parts[0].quantity', { ...ok, parts: [{ id: 'p', width: 10, height: 10, quantity: 0 }] }, /at least 1/],
     ['stock', { ...ok, stock: [] }, /at least one stock item/],
+    ['parts', { stock: ok.stock }, /parts is required/],
     ['stock[0].trim', { ...ok, stock: [{ id: 's', kind: 'sheet', width: 100, height: 100, trim: 50 }] }, /no usable width/],
     ['parts[1].id', { ...ok, parts: [ok.parts[0], ok.parts[0]] }, /used twice/],
   ])('%s', (field, input, message) => {
