@@ -249,7 +249,8 @@ function completeWithExtra(pr: Problem, partial: Packing, t: number, opts: Decod
 }
 
 /** Packs `items` into the bins of `types` (one or two bins) trying a few orderings and rules. */
-function repackInto(pr: Problem, items: number[], types: number[], opts: DecodeOptions, rng: Rng, tries: number): Packing | null {
+function repackInto(pr: Problem, items: number[], types: number[], opts: DecodeOptions, ctx: SearchContext, tries: number): Packing | null {
+  const { rng, budget } = ctx;
   const it = pr.items;
   const keyed = (key: (i: number) => number) => Int32Array.from([...items].sort((a, b) => key(b) - key(a) || a - b));
   const orders = [
@@ -273,6 +274,7 @@ function repackInto(pr: Problem, items: number[], types: number[], opts: DecodeO
       }
     }
     for (const rule of k < orders.length ? rules : [rules[randomInt(rng, rules.length)]!]) {
+      if (budget.expired()) return null;
       const p = decode(pr, order, { ...opts, rule, bestFit: false }, types);
       if (p.leftover.length === 0) return p;
     }
@@ -301,7 +303,7 @@ function emptyWeakest(pr: Problem, cur: Packing, weakest: number, opts: DecodeOp
       const need = pr.items[i]!.area;
       for (const b of others) {
         if (free(b) < need - 1e-9) break;
-        const p = repackInto(pr, [...items[b]!, i], [types[b]!], opts, rng, 6);
+        const p = repackInto(pr, [...items[b]!, i], [types[b]!], opts, ctx, 6);
         if (p) {
           bins[b] = p.bins[0]!;
           items[b]!.push(i);
@@ -318,7 +320,7 @@ function emptyWeakest(pr: Problem, cur: Packing, weakest: number, opts: DecodeOp
           const b1 = others[x]!;
           const b2 = others[y]!;
           if (free(b1) + free(b2) < need - 1e-9) continue;
-          const p = repackInto(pr, [...items[b1]!, ...items[b2]!, i], [types[b1]!, types[b2]!], opts, rng, 4);
+          const p = repackInto(pr, [...items[b1]!, ...items[b2]!, i], [types[b1]!, types[b2]!], opts, ctx, 4);
           if (p) {
             bins[b1] = p.bins[0]!;
             bins[b2] = p.bins[1]!;
@@ -335,7 +337,7 @@ function emptyWeakest(pr: Problem, cur: Packing, weakest: number, opts: DecodeOp
   }
   if (items[weakest]!.length > 0) {
     // Not emptied: repack what is left in the weakest bin.
-    const p = repackInto(pr, items[weakest]!, [types[weakest]!], opts, rng, 1);
+    const p = repackInto(pr, items[weakest]!, [types[weakest]!], opts, ctx, 1);
     if (!p) return cur;
     bins[weakest] = p.bins[0]!;
   } else {
@@ -455,7 +457,7 @@ function downsize(pr: Problem, cur: Packing, opts: DecodeOptions, ctx: SearchCon
       .sort((x, y) => value(x) - value(y) || area(x) - area(y) || x - y);
     for (const t of better) {
       if (area(t) < bins[b]!.usedArea - 1e-9) continue;
-      const p = repackInto(pr, items, [t], opts, ctx.rng, 6);
+      const p = repackInto(pr, items, [t], opts, ctx, 6);
       if (p) {
         bins[b] = p.bins[0]!;
         types[b] = t;
