@@ -14,6 +14,7 @@ export class Budget {
   private stopped = false;
   private calls = 0;
   private lastTick = 0;
+  private lastCall = -1;
   readonly workLimit: number;
   readonly workStart: number;
 
@@ -23,11 +24,13 @@ export class Budget {
     private readonly shouldStop: (() => boolean) | undefined,
     workPerMs = WORK_PER_MS,
     private readonly onTick?: () => void,
+    /** Milliseconds of work allowed (default the time limit); fixed in advance, so runs repeat. */
+    workMs = timeLimitMs,
   ) {
     this.start = now ? now() : 0;
     this.deadline = this.start + timeLimitMs;
     this.workStart = work.n;
-    this.workLimit = work.n + timeLimitMs * workPerMs;
+    this.workLimit = work.n + workMs * workPerMs;
   }
 
   /** True once the work or time is used up or the caller asked to stop. */
@@ -39,7 +42,10 @@ export class Budget {
     if (this.shouldStop?.()) return (this.stopped = true);
     if (this.now) {
       const t = this.now();
-      if (t >= this.deadline) return (this.stopped = true);
+      // Stop when the next step, as long as the last one, would end past the deadline.
+      const step = this.lastCall >= 0 ? t - this.lastCall : 0;
+      this.lastCall = t;
+      if (t + step >= this.deadline) return (this.stopped = true);
       // Progress about every 100 ms.
       if (t - this.lastTick >= 100) {
         this.lastTick = t;

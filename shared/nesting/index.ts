@@ -148,7 +148,10 @@ export function nest(job: NestJob, options: NestOptions = {}): Layout {
   const rng = mulberry32(job.seed);
   const totalItems = prepared.problems.reduce((n, p) => n + p.items.length, 0);
   let itemsLeft = totalItems;
-  let timeLeft = job.timeLimitMs;
+  // Time kept back from the search for bounds, cut plans and offcuts: 10 % plus 0.05 ms a part,
+  // at most 30 % of the limit (measured: about 0.03–0.07 ms a part for the layout work).
+  const reserve = Math.min(0.3 * job.timeLimitMs, 0.1 * job.timeLimitMs + 0.05 * totalItems);
+  let timeLeft = job.timeLimitMs - reserve;
   const solved: Solved[] = [];
   const unplaced = new Map<number, { n: number; reason: string }>();
   const addUnplaced = (part: number, n: number, reason: string) => {
@@ -167,9 +170,15 @@ export function nest(job: NestJob, options: NestOptions = {}): Layout {
     const started = now ? now() : 0;
     const doneItems = totalItems - itemsLeft;
     let budget!: Budget;
-    // 90 % of the share for the search; the rest covers bounds, cut plans and offcuts.
-    budget = new Budget(Math.max(0, 0.9 * share), now, shouldStop, undefined, () =>
-      report((doneItems + pr.items.length * budget.fraction()) / Math.max(1, totalItems), 'searching'),
+    // The work share depends on the job only (not on how fast earlier groups ran): same layout every run.
+    const workShare = ((job.timeLimitMs - reserve) * pr.items.length) / Math.max(1, totalItems);
+    budget = new Budget(
+      Math.max(0, share),
+      now,
+      shouldStop,
+      undefined,
+      () => report((doneItems + pr.items.length * budget.fraction()) / Math.max(1, totalItems), 'searching'),
+      workShare,
     );
     const ctxFor = (lb: number, roll: boolean): SearchContext => ({
       rng,
