@@ -178,6 +178,16 @@ describe('nest: determinism, progress, cancellation and the time limit', () => {
     expect(JSON.stringify(nestChecked(j))).toBe(JSON.stringify(nestChecked(j)));
   });
 
+  it('a clock that does not cut the search changes nothing: the work budget decides (two material groups)', () => {
+    const j = job({
+      ...cabinet,
+      mode: 'guillotine',
+      stock: [...cabinet.stock, { id: 'mdf25', kind: 'sheet', width: 2440, height: 1220, trim: 10, material: 'MDF', thickness: 25 }],
+      parts: [...cabinet.parts, { id: 'baffle', width: 220, height: 360, quantity: 6, material: 'MDF', thickness: 25 }],
+    });
+    expect(JSON.stringify(nestChecked(j, { now: () => 0 }))).toBe(JSON.stringify(nestChecked(j)));
+  });
+
   it('reports progress from 0 to 1 and finishes with fraction 1', () => {
     const seen: NestProgress[] = [];
     nestChecked(job({ ...cabinet, mode: 'free', parts: [...cabinet.parts, { id: 'x', width: 500, height: 450, quantity: 5, material: 'MDF', thickness: 18 }] }), { onProgress: (p) => seen.push(p) });
