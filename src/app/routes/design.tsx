@@ -12,6 +12,7 @@ import { HistoryList } from '../../components/history/history-list';
 import { paths } from '../../config/paths';
 import { designQueryOptions } from '../../features/designs/api/get-design';
 import { DesignEditor } from '../../features/designs/components/design-editor';
+import { formatInches } from '../../../shared/units/index';
 import { formatSizeMm } from '../../lib/format';
 import { parseId } from './params';
 import { useWorkshop } from './workshop';
@@ -52,7 +53,7 @@ export function DesignRoute() {
           </Link>
         }
         title={<span data-testid="design-title">{data.name}</span>}
-        description={`Outer size ${formatSizeMm(outer.width, outer.height, outer.depth)}`}
+        description={`Outer size ${units === 'in' ? `${[outer.width, outer.height, outer.depth].map((v) => formatInches(v).replace(/"$/, '')).join(' × ')} in` : formatSizeMm(outer.width, outer.height, outer.depth)}`}
       />
       <DesignEditor
         key={designId}
@@ -67,6 +68,7 @@ export function DesignRoute() {
           </ErrorBoundary>
         )}
         conflictDetails={(theirs, mine) => <ConflictChanges theirs={theirs} mine={mine} units={units} />}
+        units={units}
       />
       <Card title="History" className="mt-8 max-w-3xl">
         <HistoryList workshopId={workshopId} subjectType="design" subjectId={designId} />

@@ -1,31 +1,33 @@
 import { Card } from '../../../components/ui/card';
 import { JoineryField } from './joinery-field';
-import { NumField, TextField } from './fields';
+import { LengthField, NumField, TextField, useLengthUnit } from './fields';
 
 const MATERIALS = ['MDF', 'Birch plywood', 'Plywood', 'Particleboard', 'HDF'];
 
 export function BoxSection({ readOnly }: { readOnly: boolean }) {
+  const unit = useLengthUnit();
+  const lengths =
+    unit === 'in' ? 'Lengths in inches; type inches or millimetres (12 3/8, 12.375 in, 314.5 mm).' : 'Lengths in millimetres; type millimetres or inches (314.5, 12 3/8").';
   return (
-    <Card id="box" title="Box" description="Outer size, sheet material and how the panels join. All lengths in millimetres.">
+    <Card id="box" title="Box" description={`Outer size, sheet material and how the panels join. ${lengths}`}>
       <div className="space-y-5">
         <TextField name="name" label="Name" />
         <div>
           <p className="mb-2 text-[13px] font-bold text-zinc-700">Outer size</p>
           <div className="grid grid-cols-3 gap-3">
-            <NumField name="outer.width" label="Width (W)" unit="mm" />
-            <NumField name="outer.height" label="Height (H)" unit="mm" />
-            <NumField name="outer.depth" label="Depth (D)" unit="mm" />
+            <LengthField name="outer.width" label="Width (W)" />
+            <LengthField name="outer.height" label="Height (H)" />
+            <LengthField name="outer.depth" label="Depth (D)" />
           </div>
         </div>
         <div>
           <p className="mb-2 text-[13px] font-bold text-zinc-700">Material</p>
           <div className="grid grid-cols-3 gap-3">
             <TextField name="material.name" label="Sheet material" list="boxwright-materials" />
-            <NumField name="material.thickness" label="Panel thickness" unit="mm" />
-            <NumField
+            <LengthField name="material.thickness" label="Panel thickness" />
+            <LengthField
               name="baffleThickness"
               label="Baffle thickness"
-              unit="mm"
               placeholder="same"
               hint="Empty: same as the panels."
             />

@@ -4,7 +4,7 @@ import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { newBrace, newWindow, otherAxes, type BraceInput, type WindowInput } from '../defaults';
 import { BAR_AXIS_LABELS, COORD_LABELS, SHELF_AXIS_LABELS } from '../labels';
-import { ItemCard, ItemError, NumField, SelectField } from './fields';
+import { ItemCard, ItemError, LengthField, SelectField } from './fields';
 
 const axisOptions = (labels: Record<Axis, string>) => AXES.map((a) => ({ value: a, label: labels[a] }));
 
@@ -54,12 +54,11 @@ export function BracesSection({ readOnly }: { readOnly: boolean }) {
               >
                 <div className="grid grid-cols-3 gap-3">
                   <SelectField name={`braces.${index}.axis`} label="Lies" options={axisOptions(SHELF_AXIS_LABELS)} />
-                  <NumField
+                  <LengthField
                     name={`braces.${index}.position`}
                     label={`Centre plane, ${COORD_LABELS[brace.axis]}`}
-                    unit="mm"
                   />
-                  <NumField name={`braces.${index}.thickness`} label="Thickness" unit="mm" />
+                  <LengthField name={`braces.${index}.thickness`} label="Thickness" />
                 </div>
                 <ShelfWindows braceIndex={index} axis={brace.axis} readOnly={readOnly} />
                 <ItemError name={`braces.${index}`} />
@@ -79,11 +78,11 @@ export function BracesSection({ readOnly }: { readOnly: boolean }) {
             >
               <div className="grid grid-cols-3 gap-3">
                 <SelectField name={`braces.${index}.axis`} label="Runs" options={axisOptions(BAR_AXIS_LABELS)} />
-                <NumField name={`braces.${index}.at.0`} label={`Centre, ${COORD_LABELS[a]}`} unit="mm" />
-                <NumField name={`braces.${index}.at.1`} label={`Centre, ${COORD_LABELS[b]}`} unit="mm" />
+                <LengthField name={`braces.${index}.at.0`} label={`Centre, ${COORD_LABELS[a]}`} />
+                <LengthField name={`braces.${index}.at.1`} label={`Centre, ${COORD_LABELS[b]}`} />
                 <div />
-                <NumField name={`braces.${index}.section.0`} label={`Section along ${a}`} unit="mm" />
-                <NumField name={`braces.${index}.section.1`} label={`Section along ${b}`} unit="mm" />
+                <LengthField name={`braces.${index}.section.0`} label={`Section along ${a}`} />
+                <LengthField name={`braces.${index}.section.1`} label={`Section along ${b}`} />
               </div>
               <ItemError name={`braces.${index}`} />
             </ItemCard>
@@ -130,15 +129,15 @@ function ShelfWindows({ braceIndex, axis, readOnly }: { braceIndex: number; axis
                 {win.shape === 'rect' ? 'Rectangular' : 'Round'} {w + 1}
               </span>
               <div className="grid flex-1 grid-cols-4 gap-3">
-                <NumField name={`${base}.u`} label={`Centre ${u}`} unit="mm" />
-                <NumField name={`${base}.v` as 'braces.0.windows.0.v'} label={`Centre ${v}`} unit="mm" />
+                <LengthField name={`${base}.u`} label={`Centre ${u}`} />
+                <LengthField name={`${base}.v` as 'braces.0.windows.0.v'} label={`Centre ${v}`} />
                 {win.shape === 'rect' ? (
                   <>
-                    <NumField name={`${base}.width`} label={`Size along ${u}`} unit="mm" />
-                    <NumField name={`${base}.height`} label={`Size along ${v}`} unit="mm" />
+                    <LengthField name={`${base}.width`} label={`Size along ${u}`} />
+                    <LengthField name={`${base}.height`} label={`Size along ${v}`} />
                   </>
                 ) : (
-                  <NumField name={`${base}.diameter`} label="Diameter" unit="mm" />
+                  <LengthField name={`${base}.diameter`} label="Diameter" />
                 )}
               </div>
               {readOnly ? null : (

@@ -16,7 +16,9 @@ import { designQueryOptions } from '../api/get-design';
 import { useUpdateDesign } from '../api/update-design';
 import { sameDesign } from '../compare';
 import { keepFaceCoords } from '../defaults';
+import type { LengthUnit } from '../../../../shared/units/index';
 import { BoxSection } from './box-section';
+import { LengthUnitContext } from './fields';
 import { BracesSection } from './braces-section';
 import { LiningSection } from './lining-section';
 import { OpeningsSection } from './openings-section';
@@ -78,10 +80,13 @@ export function DesignEditor({
   canEdit,
   studio,
   conflictDetails,
+  units = 'mm',
 }: {
   workshopId: number;
   initial: DesignDto;
   canEdit: boolean;
+  /** The unit lengths are shown in (kept per user); every length box accepts either. */
+  units?: LengthUnit;
   /** The canvas studio, composed in by the route (it lives in its own feature and chunk). */
   studio?: (slot: StudioSlot) => ReactNode;
   /** What changed between their saved version and mine, shown in the conflict dialog. */
@@ -174,127 +179,129 @@ export function DesignEditor({
   };
 
   return (
-    <FormProvider {...form}>
-      {/* One save bar for the whole page, kept in view below the app header while the page scrolls. */}
-      <div className="sticky top-[calc(3.5rem+1px)] z-20 -mx-6 mb-5 border-b border-zinc-200 bg-zinc-50/95 px-6 py-2.5 backdrop-blur">
-        <div className="flex min-h-9 items-center justify-between gap-4" data-testid="save-status">
-          <div className="flex min-w-0 items-center gap-3 text-sm">
-            {!canEdit ? (
-              <p className="flex items-center gap-2 text-zinc-700">
-                <span className="size-2 rounded-full bg-zinc-400" />
-                <strong>Read only</strong>
-                <span className="text-zinc-500">Your role lets you read this design but not change it.</span>
-              </p>
-            ) : isDirty ? (
-              <p className="flex items-center gap-2 text-amber-800">
-                <span className="size-2 rounded-full bg-amber-500" /> Unsaved changes
-              </p>
-            ) : (
-              <p className="flex items-center gap-2 text-zinc-700">
-                <span className="size-2 rounded-full bg-accent-500" />
-                {savedAt ? 'All changes saved' : 'No changes'}
-              </p>
-            )}
-            <span className="truncate text-[13px] text-zinc-500" title={formatDateTime(base.updatedAt)}>
-              · Version {base.version}, saved {formatRelativeTime(base.updatedAt)}
-              {base.updatedBy ? ` by ${base.updatedBy}` : ''}
-            </span>
-          </div>
-          {canEdit ? (
-            <div className="flex shrink-0 gap-2">
-              <Button disabled={!isDirty || busy} onClick={discard}>
-                Discard changes
-              </Button>
-              <Button type="submit" form={FORM_ID} variant="primary" busy={busy} disabled={!isDirty && !busy} title="Save (Ctrl+S)">
-                Save design
-              </Button>
+    <LengthUnitContext value={units}>
+      <FormProvider {...form}>
+        {/* One save bar for the whole page, kept in view below the app header while the page scrolls. */}
+        <div className="sticky top-[calc(3.5rem+1px)] z-20 -mx-6 mb-5 border-b border-zinc-200 bg-zinc-50/95 px-6 py-2.5 backdrop-blur">
+          <div className="flex min-h-9 items-center justify-between gap-4" data-testid="save-status">
+            <div className="flex min-w-0 items-center gap-3 text-sm">
+              {!canEdit ? (
+                <p className="flex items-center gap-2 text-zinc-700">
+                  <span className="size-2 rounded-full bg-zinc-400" />
+                  <strong>Read only</strong>
+                  <span className="text-zinc-500">Your role lets you read this design but not change it.</span>
+                </p>
+              ) : isDirty ? (
+                <p className="flex items-center gap-2 text-amber-800">
+                  <span className="size-2 rounded-full bg-amber-500" /> Unsaved changes
+                </p>
+              ) : (
+                <p className="flex items-center gap-2 text-zinc-700">
+                  <span className="size-2 rounded-full bg-accent-500" />
+                  {savedAt ? 'All changes saved' : 'No changes'}
+                </p>
+              )}
+              <span className="truncate text-[13px] text-zinc-500" title={formatDateTime(base.updatedAt)}>
+                · Version {base.version}, saved {formatRelativeTime(base.updatedAt)}
+                {base.updatedBy ? ` by ${base.updatedBy}` : ''}
+              </span>
             </div>
-          ) : null}
-        </div>
-      </div>
-
-      {serverMessages.length > 0 || rootError ? (
-        <Alert tone="error" title="Not saved" className="mb-5">
-          {serverMessages.length > 0 ? (
-            <>
-              <p>Please correct the fields marked below:</p>
-              <ul className="mt-1 list-disc space-y-0.5 pl-5">
-                {serverMessages.map((m) => (
-                  <li key={m.formPath}>
-                    {describeFormPath(m.formPath)}: {m.message}
-                  </li>
-                ))}
-              </ul>
-            </>
-          ) : (
-            rootError
-          )}
-        </Alert>
-      ) : null}
-
-      {studio ? (
-        <div className="mb-6">
-          {studio({ design: studioDesign, readOnly: !canEdit, onChange: (design) => form.reset(design, { keepDefaultValues: true }) })}
-        </div>
-      ) : null}
-      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
-        <form id={FORM_ID} onSubmit={onSubmit} noValidate className="min-w-0" aria-label="Design">
-          <fieldset disabled={!canEdit} className="min-w-0 space-y-5">
-            <BoxSection readOnly={!canEdit} />
-            <BracesSection readOnly={!canEdit} />
-            <OpeningsSection readOnly={!canEdit} />
-            <LiningSection readOnly={!canEdit} />
-          </fieldset>
-        </form>
-
-        <aside className="space-y-4 lg:sticky lg:top-32">
-          <PlanSummary workshopId={workshopId} designId={base.id} version={base.version} dirty={isDirty} />
-          <SectionLinks braces={values.braces?.length ?? 0} openings={values.openings?.length ?? 0} lined={values.lining != null} />
-        </aside>
-      </div>
-
-      <LeaveGuard when={canEdit && isDirty && !busy} />
-
-      <Dialog
-        open={conflict !== null}
-        onClose={() => setConflict(null)}
-        role="alertdialog"
-        wide
-        title="Someone else saved this design"
-        footer={
-          conflict?.latest ? (
-            <>
-              <Button onClick={() => setConflict(null)} disabled={busy}>
-                Cancel
-              </Button>
-              <Button onClick={() => conflict.latest && (adopt(conflict.latest), setConflict(null))} disabled={busy}>
-                Reload their version
-              </Button>
-              <Button variant="primary" busy={busy} onClick={() => conflict.latest && save(conflict.mine, conflict.latest.version)}>
-                Keep mine (overwrite)
-              </Button>
-            </>
-          ) : (
-            <Button onClick={() => setConflict(null)}>Close</Button>
-          )
-        }
-      >
-        {conflict?.latest ? (
-          <div className="space-y-2">
-            <p>
-              Since you opened it, version {conflict.latest.version} was saved
-              {conflict.latest.updatedBy ? ` by ${conflict.latest.updatedBy}` : ''}, {formatRelativeTime(conflict.latest.updatedAt)}.
-            </p>
-            <p>
-              <strong className="text-zinc-900">Reload their version</strong> drops your changes.{' '}
-              <strong className="text-zinc-900">Keep mine</strong> saves your version over theirs.
-            </p>
-            {conflictDetails ? conflictDetails(conflict.latest.design, conflict.mine) : null}
+            {canEdit ? (
+              <div className="flex shrink-0 gap-2">
+                <Button disabled={!isDirty || busy} onClick={discard}>
+                  Discard changes
+                </Button>
+                <Button type="submit" form={FORM_ID} variant="primary" busy={busy} disabled={!isDirty && !busy} title="Save (Ctrl+S)">
+                  Save design
+                </Button>
+              </div>
+            ) : null}
           </div>
-        ) : (
-          <p>The newer version could not be loaded just now. Your changes are still here; try saving again in a moment.</p>
-        )}
-      </Dialog>
-    </FormProvider>
+        </div>
+
+        {serverMessages.length > 0 || rootError ? (
+          <Alert tone="error" title="Not saved" className="mb-5">
+            {serverMessages.length > 0 ? (
+              <>
+                <p>Please correct the fields marked below:</p>
+                <ul className="mt-1 list-disc space-y-0.5 pl-5">
+                  {serverMessages.map((m) => (
+                    <li key={m.formPath}>
+                      {describeFormPath(m.formPath)}: {m.message}
+                    </li>
+                  ))}
+                </ul>
+              </>
+            ) : (
+              rootError
+            )}
+          </Alert>
+        ) : null}
+
+        {studio ? (
+          <div className="mb-6">
+            {studio({ design: studioDesign, readOnly: !canEdit, onChange: (design) => form.reset(design, { keepDefaultValues: true }) })}
+          </div>
+        ) : null}
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+          <form id={FORM_ID} onSubmit={onSubmit} noValidate className="min-w-0" aria-label="Design">
+            <fieldset disabled={!canEdit} className="min-w-0 space-y-5">
+              <BoxSection readOnly={!canEdit} />
+              <BracesSection readOnly={!canEdit} />
+              <OpeningsSection readOnly={!canEdit} />
+              <LiningSection readOnly={!canEdit} />
+            </fieldset>
+          </form>
+
+          <aside className="space-y-4 lg:sticky lg:top-32">
+            <PlanSummary workshopId={workshopId} designId={base.id} version={base.version} dirty={isDirty} />
+            <SectionLinks braces={values.braces?.length ?? 0} openings={values.openings?.length ?? 0} lined={values.lining != null} />
+          </aside>
+        </div>
+
+        <LeaveGuard when={canEdit && isDirty && !busy} />
+
+        <Dialog
+          open={conflict !== null}
+          onClose={() => setConflict(null)}
+          role="alertdialog"
+          wide
+          title="Someone else saved this design"
+          footer={
+            conflict?.latest ? (
+              <>
+                <Button onClick={() => setConflict(null)} disabled={busy}>
+                  Cancel
+                </Button>
+                <Button onClick={() => conflict.latest && (adopt(conflict.latest), setConflict(null))} disabled={busy}>
+                  Reload their version
+                </Button>
+                <Button variant="primary" busy={busy} onClick={() => conflict.latest && save(conflict.mine, conflict.latest.version)}>
+                  Keep mine (overwrite)
+                </Button>
+              </>
+            ) : (
+              <Button onClick={() => setConflict(null)}>Close</Button>
+            )
+          }
+        >
+          {conflict?.latest ? (
+            <div className="space-y-2">
+              <p>
+                Since you opened it, version {conflict.latest.version} was saved
+                {conflict.latest.updatedBy ? ` by ${conflict.latest.updatedBy}` : ''}, {formatRelativeTime(conflict.latest.updatedAt)}.
+              </p>
+              <p>
+                <strong className="text-zinc-900">Reload their version</strong> drops your changes.{' '}
+                <strong className="text-zinc-900">Keep mine</strong> saves your version over theirs.
+              </p>
+              {conflictDetails ? conflictDetails(conflict.latest.design, conflict.mine) : null}
+            </div>
+          ) : (
+            <p>The newer version could not be loaded just now. Your changes are still here; try saving again in a moment.</p>
+          )}
+        </Dialog>
+      </FormProvider>
+    </LengthUnitContext>
   );
 }

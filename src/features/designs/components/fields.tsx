@@ -1,12 +1,18 @@
 /**
  * Inputs of the design form, wired to react-hook-form through its context so every section can say
- * just `<NumField name="outer.width" label="Width" unit="mm" />`. Each shows its own error inline.
+ * just `<LengthField name="outer.width" label="Width" />`. Each shows its own error inline.
  */
-import type { ReactNode } from 'react';
-import { get, useFormContext, type Path, type RegisterOptions } from 'react-hook-form';
+import { createContext, useContext, useEffect, useRef, useState, type ReactNode } from 'react';
+import { get, useController, useFormContext, type Path, type RegisterOptions } from 'react-hook-form';
 import type { DesignInput } from '../../../../shared/schemas/design.schema';
+import type { LengthUnit } from '../../../../shared/units/index';
 import { Field, Input, Select } from '../../../components/ui/field';
+import { formatLengthInput, parseLengthInput } from '../../../lib/length-text';
 import { parseNumberField } from '../../../lib/number-input';
+
+/** The unit lengths are shown in (the user's mm/inch choice); every length box accepts either. */
+export const LengthUnitContext = createContext<LengthUnit>('mm');
+export const useLengthUnit = () => useContext(LengthUnitContext);
 
 export type DesignPath = Path<DesignInput>;
 
@@ -57,6 +63,85 @@ export function NumField({
           aria-describedby={describedBy}
           data-field={name}
           {...register(name, options)}
+        />
+      )}
+    </Field>
+  );
+}
+
+/**
+ * A length in the user's unit: `314.5` or `12 3/8`; typed as `12 3/8"`, `12.375 in`, `314.5 mm` or a bare
+ * number in the shown unit. The form holds millimetres; text that is not a length holds NaN, so the form
+ * cannot be saved while it shows, and the message says what to write.
+ */
+export function LengthField({
+  name,
+  label,
+  hint,
+  placeholder,
+  className,
+}: {
+  name: DesignPath;
+  label: ReactNode;
+  hint?: ReactNode;
+  placeholder?: string;
+  className?: string;
+}) {
+  const unit = useLengthUnit();
+  const { control } = useFormContext<DesignInput>();
+  const { field, fieldState } = useController({ control, name });
+  const value = typeof field.value === 'number' ? field.value : undefined;
+  const shown = value === undefined || Number.isNaN(value) ? '' : formatLengthInput(value, unit);
+  /** What the person is typing; null while the box shows the form's value. */
+  const [draft, setDraft] = useState<string | null>(null);
+  const [parseError, setParseError] = useState<string | null>(null);
+  const inputRef = useRef<HTMLInputElement | null>(null);
+
+  // A value set from outside (the studio, a reset, a reload) replaces a draft the person has left.
+  useEffect(() => {
+    if (document.activeElement === inputRef.current) return;
+    if (value !== undefined && Number.isNaN(value)) return;
+    setDraft(null);
+    setParseError(null);
+  }, [value]);
+
+  const onText = (text: string) => {
+    setDraft(text);
+    const r = parseLengthInput(text, unit);
+    if (r.ok) {
+      setParseError(null);
+      field.onChange(r.mm);
+    } else {
+      setParseError(r.message);
+      field.onChange(Number.NaN);
+    }
+  };
+
+  return (
+    <Field label={label} unit={unit} error={parseError ?? fieldState.error?.message} hint={hint} className={className}>
+      {({ id, invalid, describedBy }) => (
+        <Input
+          id={id}
+          type="text"
+          autoComplete="off"
+          spellCheck={false}
+          placeholder={placeholder}
+          withUnit
+          invalid={invalid}
+          aria-describedby={describedBy}
+          data-field={name}
+          name={field.name}
+          ref={(el) => {
+            inputRef.current = el;
+            field.ref(el);
+          }}
+          value={draft ?? shown}
+          onChange={(event) => onText(event.target.value)}
+          onBlur={() => {
+            field.onBlur();
+            // Left with a length in it: show it the way the form writes lengths (`12 3/8 in` → `12 3/8`).
+            if (parseError === null) setDraft(null);
+          }}
         />
       )}
     </Field>

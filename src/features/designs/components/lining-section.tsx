@@ -4,7 +4,7 @@ import { Card } from '../../../components/ui/card';
 import { Checkbox } from '../../../components/ui/field';
 import { DEFAULT_LINING } from '../defaults';
 import { FACE_LABELS } from '../labels';
-import { ItemError, NumField } from './fields';
+import { ItemError, LengthField, NumField } from './fields';
 
 export function LiningSection({ readOnly }: { readOnly: boolean }) {
   const { control, register, setValue } = useFormContext<DesignInput>();
@@ -29,11 +29,11 @@ export function LiningSection({ readOnly }: { readOnly: boolean }) {
       {lined ? (
         <div className="space-y-4">
           <div className="grid grid-cols-3 gap-3">
-            <NumField name="lining.thickness" label="Thickness" unit="mm" />
-            <NumField name="lining.crush" label="Crush allowance" unit="mm" hint="Pieces are cut this much larger each way." />
+            <LengthField name="lining.thickness" label="Thickness" />
+            <LengthField name="lining.crush" label="Crush allowance" hint="Pieces are cut this much larger each way." />
             <NumField name="lining.density" label="Fill density" unit="kg/m³" />
-            <NumField name="lining.minSliver" label="Smallest strip kept" unit="mm" hint="Narrower strips are dropped, with a warning." />
-            <NumField name="lining.portClearance" label="Clearance around ports" unit="mm" />
+            <LengthField name="lining.minSliver" label="Smallest strip kept" hint="Narrower strips are dropped, with a warning." />
+            <LengthField name="lining.portClearance" label="Clearance around ports" />
           </div>
           <fieldset>
             <legend className="mb-2 text-[13px] text-zinc-600">Faces to line</legend>

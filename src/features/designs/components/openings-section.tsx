@@ -6,7 +6,7 @@ import { Card } from '../../../components/ui/card';
 import { Checkbox, Field, Select } from '../../../components/ui/field';
 import { faceCentre, newOpening, type OpeningInput } from '../defaults';
 import { COORD_LABELS, FACE_LABELS, OPENING_LABELS } from '../labels';
-import { ItemCard, ItemError, NumField, SelectField } from './fields';
+import { ItemCard, ItemError, LengthField, NumField, SelectField } from './fields';
 
 const FACE_OPTIONS = FACES.map((f) => ({ value: f, label: FACE_LABELS[f] }));
 const OPENING_TYPES = ['driver', 'port', 'terminal', 'lead'] as const;
@@ -77,15 +77,15 @@ function OpeningFields({ index, opening }: { index: number; opening: OpeningInpu
     <div className="space-y-3">
       <div className="grid grid-cols-4 gap-3">
         <SelectField name={`${base}.face`} label="Face" options={FACE_OPTIONS} onValueChange={onFaceChange} />
-        <NumField key={`${opening.face}-${a}`} name={`${base}.${a}`} label={COORD_LABELS[a]} unit="mm" />
-        <NumField key={`${opening.face}-${b}`} name={`${base}.${b}`} label={COORD_LABELS[b]} unit="mm" />
+        <LengthField key={`${opening.face}-${a}`} name={`${base}.${a}`} label={COORD_LABELS[a]} />
+        <LengthField key={`${opening.face}-${b}`} name={`${base}.${b}`} label={COORD_LABELS[b]} />
       </div>
       {opening.type === 'driver' ? <DriverFields index={index} opening={opening} /> : null}
       {opening.type === 'port' ? <PortFields index={index} opening={opening} /> : null}
       {opening.type === 'terminal' ? <TerminalFields index={index} opening={opening} /> : null}
       {opening.type === 'lead' ? (
         <div className="grid grid-cols-4 gap-3">
-          <NumField name={`${base}.diameter`} label="Hole diameter" unit="mm" />
+          <LengthField name={`${base}.diameter`} label="Hole diameter" />
         </div>
       ) : null}
     </div>
@@ -99,7 +99,7 @@ function DriverFields({ index, opening }: { index: number; opening: Extract<Open
   return (
     <>
       <div className="grid grid-cols-4 gap-3">
-        <NumField name={`${base}.diameter`} label="Cut-out diameter" unit="mm" />
+        <LengthField name={`${base}.diameter`} label="Cut-out diameter" />
         <NumField name={`${base}.displacementLitres`} label="Displacement" unit="L" hint="Volume the driver takes inside." />
         <NumField name={`${base}.coneAreaCm2`} label="Cone area (Sd)" unit="cm²" placeholder="—" />
         <NumField name={`${base}.excursionMm`} label="Excursion (Xmax)" unit="mm" placeholder="—" />
@@ -112,8 +112,8 @@ function DriverFields({ index, opening }: { index: number; opening: Extract<Open
             setValue(`${base}.rebate`, on ? { diameter: Math.round(diameter + 16), depth: 5 } : undefined, { shouldDirty: true })
           }
         >
-          <NumField name={`${base}.rebate.diameter`} label="Rebate diameter" unit="mm" />
-          <NumField name={`${base}.rebate.depth`} label="Rebate depth" unit="mm" />
+          <LengthField name={`${base}.rebate.diameter`} label="Rebate diameter" />
+          <LengthField name={`${base}.rebate.depth`} label="Rebate depth" />
         </OptionalGroup>
         <OptionalGroup
           label="Screw holes"
@@ -127,8 +127,8 @@ function DriverFields({ index, opening }: { index: number; opening: Extract<Open
           }
         >
           <NumField name={`${base}.screwHoles.count`} label="Count" step={1} />
-          <NumField name={`${base}.screwHoles.circleDiameter`} label="On a circle of" unit="mm" />
-          <NumField name={`${base}.screwHoles.holeDiameter`} label="Hole diameter" unit="mm" />
+          <LengthField name={`${base}.screwHoles.circleDiameter`} label="On a circle of" />
+          <LengthField name={`${base}.screwHoles.holeDiameter`} label="Hole diameter" />
         </OptionalGroup>
       </div>
     </>
@@ -163,16 +163,16 @@ function PortFields({ index, opening }: { index: number; opening: Extract<Openin
       />
       {shape === 'round' ? (
         <>
-          <NumField name={`${base}.diameter`} label="Inner diameter" unit="mm" />
-          <NumField name={`${base}.wall`} label="Tube wall" unit="mm" />
+          <LengthField name={`${base}.diameter`} label="Inner diameter" />
+          <LengthField name={`${base}.wall`} label="Tube wall" />
         </>
       ) : (
         <>
-          <NumField name={`${base}.width`} label="Inner width" unit="mm" />
-          <NumField name={`${base}.height`} label="Inner height" unit="mm" />
+          <LengthField name={`${base}.width`} label="Inner width" />
+          <LengthField name={`${base}.height`} label="Inner height" />
         </>
       )}
-      <NumField name={`${base}.length`} label="Length" unit="mm" hint="From the outer face." />
+      <LengthField name={`${base}.length`} label="Length" hint="From the outer face." />
       <NumField name={`${base}.targetHz`} label="Target tuning" unit="Hz" placeholder="—" hint="Optional." />
     </div>
   );
@@ -204,11 +204,11 @@ function TerminalFields({ index, opening }: { index: number; opening: Extract<Op
         )}
       </Field>
       {round ? (
-        <NumField name={`${base}.diameter`} label="Diameter" unit="mm" />
+        <LengthField name={`${base}.diameter`} label="Diameter" />
       ) : (
         <>
-          <NumField name={`${base}.width`} label="Width" unit="mm" />
-          <NumField name={`${base}.height`} label="Height" unit="mm" />
+          <LengthField name={`${base}.width`} label="Width" />
+          <LengthField name={`${base}.height`} label="Height" />
         </>
       )}
     </div>

@@ -5,8 +5,10 @@ import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { Spinner } from '../../../components/ui/spinner';
 import { describeFormPath, fieldMessages } from '../../../lib/field-paths';
+import { formatLength } from '../../../../shared/units/index';
 import { formatNumber } from '../../../lib/format';
 import { usePlan } from '../api/get-plan';
+import { useLengthUnit } from './fields';
 
 function Row({ label, value, strong, note }: { label: ReactNode; value: ReactNode; strong?: boolean; note?: ReactNode }) {
   return (
@@ -25,6 +27,8 @@ const minus = (value: number) => (value > 0 ? `− ${formatNumber(value, 2)} L` 
 
 export function PlanFigures({ plan }: { plan: Plan }) {
   const { volumes, port } = plan;
+  const unit = useLengthUnit();
+  const length = (mm: number) => formatLength(mm, unit);
   const panelCount = plan.panels.reduce((n, p) => n + p.quantity, 0);
   const liningCount = plan.liningPieces.reduce((n, p) => n + p.quantity, 0);
   return (
@@ -46,11 +50,11 @@ export function PlanFigures({ plan }: { plan: Plan }) {
         {port ? (
           <>
             <Row label="Port tuning" value={`${formatNumber(port.tuningHz, 1)} Hz`} strong />
-            <Row label="Effective port length" value={`${formatNumber(port.effectiveLengthMm)} mm`} />
+            <Row label="Effective port length" value={length(port.effectiveLengthMm)} />
             {port.lengthForTargetMm !== undefined && port.targetHz !== undefined ? (
               <Row
                 label={`Length for ${formatNumber(port.targetHz)} Hz`}
-                value={`${formatNumber(port.lengthForTargetMm)} mm`}
+                value={length(port.lengthForTargetMm)}
               />
             ) : null}
             {port.peakAirSpeedMs !== undefined ? (

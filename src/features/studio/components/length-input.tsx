@@ -1,11 +1,11 @@
 /**
  * Inspector fields that commit on Enter or on leaving the field (Escape reverts): lengths accept mm or
- * inches whatever the unit shown (`314.5 mm`, `12 3/8 in`, `12.375"`; a bare number is in the shown unit),
- * plain numbers (litres, Hz, cm²) show their unit after them.
+ * inches whatever the unit shown (`314.5 mm`, `12 3/8 in`, `12.375"`; a bare number is in the shown unit)
+ * and show the exact value (lib/length-text); plain numbers (litres, Hz, cm²) show their unit after them.
  */
 import { useEffect, useId, useState } from 'react';
 import type { UnitSystem } from '../model/types';
-import { formatLength, parseLength } from '../model/units';
+import { formatLengthInput, parseLengthInput } from '../../../lib/length-text';
 
 type Parsed = { ok: true; value: number | undefined } | { ok: false; message: string };
 
@@ -80,38 +80,50 @@ export interface LengthInputProps {
   valueMm: number | undefined;
   units: UnitSystem;
   readOnly?: boolean;
-  /** Values must be greater than this (0 by default: lengths are positive). */
-  min?: number;
+  /** 0 is allowed (a position, a tube wall, a crush allowance); otherwise lengths must be greater than 0. */
+  allowZero?: boolean;
   allowEmpty?: boolean;
   onCommit(valueMm: number | undefined): void;
   testId?: string;
 }
 
-export function LengthInput({ label, valueMm, units, min = 0, allowEmpty, ...rest }: LengthInputProps) {
+export function LengthInput({ label, valueMm, units, allowZero, allowEmpty, ...rest }: LengthInputProps) {
   const parse = (text: string): Parsed => {
-    if (text.trim() === '' && allowEmpty) return { ok: true, value: undefined };
-    const r = parseLength(text, units);
+    const r = parseLengthInput(text, units);
     if (!r.ok) return r;
-    if (!(r.mm > min)) return { ok: false, message: `${label.toLowerCase()} must be greater than ${formatLength(min, units)}` };
-    return { ok: true, value: Math.round(r.mm * 10000) / 10000 };
+    if (r.mm === undefined) return allowEmpty ? { ok: true, value: undefined } : { ok: false, message: `${label.toLowerCase()} is required` };
+    if (allowZero ? r.mm < 0 : !(r.mm > 0)) return { ok: false, message: `${label.toLowerCase()} must be ${allowZero ? '0 or more' : 'greater than 0'}` };
+    return { ok: true, value: r.mm };
   };
-  return <CommitInput label={label} shown={valueMm === undefined ? '' : formatLength(valueMm, units)} parse={parse} {...rest} />;
+  const shown = valueMm === undefined ? '' : formatLengthInput(valueMm, units, { unit: true });
+  return <CommitInput label={label} shown={shown} parse={parse} {...rest} />;
 }
 
 export interface NumberFieldProps {
   label: string;
   value: number | undefined;
-  unit: string;
+  /** Shown after the number; none for a count. */
+  unit?: string;
   readOnly?: boolean;
   allowEmpty?: boolean;
+  /** Whole numbers only, from `min` to `max` (a count of screw holes). */
+  integer?: { min: number; max: number };
+  /** The value must be greater than 0 (a density, a cone area), not just 0 or more. */
+  positive?: boolean;
   onCommit(value: number | undefined): void;
+  testId?: string;
 }
 
-export function NumberField({ label, value, unit, allowEmpty, ...rest }: NumberFieldProps) {
+export function NumberField({ label, value, unit, allowEmpty, integer, positive, ...rest }: NumberFieldProps) {
   const parse = (text: string): Parsed => {
-    if (text.trim() === '') return allowEmpty ? { ok: true, value: undefined } : { ok: false, message: `${label.toLowerCase()} is required` };
+    const name = label.toLowerCase();
+    if (text.trim() === '') return allowEmpty ? { ok: true, value: undefined } : { ok: false, message: `${name} is required` };
     const n = Number(text.trim().replace(',', '.'));
-    if (!Number.isFinite(n) || n < 0) return { ok: false, message: `${label.toLowerCase()} must be a number, 0 or more` };
+    if (integer) {
+      if (!Number.isInteger(n) || n < integer.min || n > integer.max) return { ok: false, message: `${name} must be a whole number from ${integer.min} to ${integer.max}` };
+      return { ok: true, value: n };
+    }
+    if (!Number.isFinite(n) || n < 0 || (positive && n === 0)) return { ok: false, message: `${name} must be a number ${positive ? 'greater than 0' : '0 or more'}` };
     return { ok: true, value: n };
   };
   return <CommitInput label={label} shown={value === undefined ? '' : String(value)} parse={parse} suffix={unit} {...rest} />;

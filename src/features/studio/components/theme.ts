@@ -27,6 +27,7 @@ export const ROLE_STYLE: Record<Role, RoleStyle> = {
   window: { fill: '#fdfcfa', stroke: '#5e4e33', strokeWidth: 0.75 },
   driver: { fill: 'rgba(60, 72, 88, 0.10)', stroke: '#3c4858', strokeWidth: 1.25 },
   rebate: { fill: 'rgba(60, 72, 88, 0.05)', stroke: '#6b7685', strokeWidth: 0.75 },
+  screw: { fill: '#fdfcfa', stroke: '#3c4858', strokeWidth: 0.75 },
   port: { fill: '#fdfcfa', stroke: '#35536e', strokeWidth: 1 },
   tube: { fill: '#b7c6d4', stroke: '#35536e', strokeWidth: 1 },
   terminal: { fill: '#e3e6ea', stroke: '#4a5563', strokeWidth: 1 },

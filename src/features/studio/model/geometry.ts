@@ -69,12 +69,14 @@ export function portOuterDiameterMm(o: Extract<Opening, { type: 'port' }>): numb
 
 /**
  * The cut-out's extent on its face along the face's two coordinates (FACE_COORDS order), and whether
- * it is round. A driver's rebate counts when it is wider than the cut-out.
+ * it is round. A driver's rebate and screw holes count when they reach further than the cut-out
+ * (as in the engine's fit check).
  */
 export function openingExtentMm(o: Opening): { size: [number, number]; round: boolean } {
   switch (o.type) {
     case 'driver': {
-      const d = Math.max(o.diameter, o.rebate?.diameter ?? 0);
+      const screws = o.screwHoles ? o.screwHoles.circleDiameter + o.screwHoles.holeDiameter : 0;
+      const d = Math.max(o.diameter, o.rebate?.diameter ?? 0, screws);
       return { size: [d, d], round: true };
     }
     case 'port':

@@ -6,6 +6,7 @@
  * - top: section at mid-height seen from above, h = x, v = z (front at the bottom).
  * The canvas only maps these to pixels and styles them by `role`.
  */
+import { screwHoleCentres } from '../../../../shared/cabinet/elements';
 import { FACE_COORDS } from '../../../../shared/schemas/design.schema';
 import type { Axis, Face } from '../../../../shared/schemas/design.schema';
 import { baffleThicknessMm, cavity, faceNormal, openingExtentMm, otherAxes, outerSizeMm, portOuterDiameterMm } from './geometry';
@@ -34,6 +35,8 @@ export type Role =
   | 'window'
   | 'driver'
   | 'rebate'
+  /** A driver's screw hole. */
+  | 'screw'
   | 'port'
   | 'tube'
   | 'terminal'
@@ -173,9 +176,15 @@ export function projectView(doc: StudioDoc, view: ViewName): Prim[] {
       const cy = pos(va);
       const sh = coords[0] === ha ? size[0] : size[1];
       const sv = coords[0] === ha ? size[1] : size[0];
-      if (o.type === 'driver' && o.rebate && o.rebate.diameter > o.diameter) {
-        prims.push({ kind: 'circle', role: 'rebate', cx, cy, r: o.rebate.diameter / 2, hit, dashed });
+      if (o.type === 'driver') {
+        if (o.rebate && o.rebate.diameter > o.diameter) prims.push({ kind: 'circle', role: 'rebate', cx, cy, r: o.rebate.diameter / 2, hit, dashed });
         prims.push({ kind: 'circle', role, cx, cy, r: o.diameter / 2, hit, dashed });
+        // Screw holes where the engine puts them on the panel (the first at the top).
+        if (o.screwHoles) {
+          for (const [sx, sy] of screwHoleCentres(cx, cy, o.screwHoles.count, o.screwHoles.circleDiameter)) {
+            prims.push({ kind: 'circle', role: 'screw', cx: sx, cy: sy, r: o.screwHoles.holeDiameter / 2, hit, dashed });
+          }
+        }
       } else if (round && o.type === 'port' && (o.wall ?? 0) > 0) {
         // The tube's wall as a ring, the bore inside it.
         prims.push({ kind: 'circle', role: 'tube', cx, cy, r: sh / 2, hit, dashed });
