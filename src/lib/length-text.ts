@@ -2,7 +2,8 @@
  * Lengths in input boxes: millimetres inside, shown in the user's unit (mm, or inches) and typed in either
  * (parsing is shared/units' parseLength: `12 3/8"`, `12.375 in`, `314.5 mm`, a bare number in the shown
  * unit). An input never shows a rounded value that would change the design if committed as shown:
- * inches are a fraction only when the length is a whole number of 1/32 in, decimals (3 places) otherwise.
+ * millimetres to 0.1 µm (as lengths are kept); inches as a fraction only when the length is a whole number of
+ * 1/32 in, otherwise as decimals to 0.001 in (and a box whose text is not changed is never committed).
  * Used by the design form and the studio's inspector.
  */
 import { formatInches, MM_PER_INCH, parseLength, type LengthUnit, type ParseResult } from '../../shared/units/index';
@@ -11,13 +12,13 @@ import { formatInches, MM_PER_INCH, parseLength, type LengthUnit, type ParseResu
 const FRACTION_TOLERANCE_MM = 0.0005;
 
 /**
- * `314.325` mm → `314.325` (mm) or `12 3/8` (in); `220` → `8.661` (in). With `unit: true`: `314.325 mm`,
+ * `314.325` mm → `314.325` (mm) or `12 3/8` (in); `1.5875` → `1.5875` (mm) or `1/16` (in); `220` → `8.661` (in). With `unit: true`: `314.325 mm`,
  * `12 3/8"`.
  */
 export function formatLengthInput(mm: number, unit: LengthUnit, opts: { unit?: boolean } = {}): string {
   const withUnit = opts.unit ?? false;
   if (unit === 'mm') {
-    const text = mm.toFixed(3).replace(/\.?0+$/, '');
+    const text = mm.toFixed(4).replace(/\.?0+$/, '');
     const clean = text === '-0' ? '0' : text;
     return withUnit ? `${clean} mm` : clean;
   }
