@@ -19,7 +19,7 @@ import { useCutPlans } from '../../features/cut-plans/api/get-cut-plans';
 import { MakeCutPlan } from '../../features/cut-plans/components/make-cut-plan';
 import { useDesigns } from '../../features/designs/api/get-designs';
 import { parseId } from './params';
-import { useWorkshop } from './workshop';
+import { useWorkshop, workshopTitle } from './workshop';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -42,18 +42,27 @@ export function BuildRoute() {
   const [deleting, setDeleting] = useState(false);
   const openPlan = useCallback((planId: number) => navigate(paths.cutPlan.getHref(workshopId, planId)), [navigate, workshopId]);
 
-  if (build.isPending) return <Spinner label="Loading the build…" />;
+  if (build.isPending)
+    return (
+      <>
+        <title>{workshopTitle('Build', membership.workshopName)}</title>
+        <Spinner label="Loading the build…" />
+      </>
+    );
   if (build.isError)
     return (
-      <Alert tone="error" title="Could not load the build" actions={<Button onClick={() => build.refetch()}>Try again</Button>}>
-        {build.error.message}
-      </Alert>
+      <>
+        <title>{workshopTitle('Build', membership.workshopName)}</title>
+        <Alert tone="error" title="Could not load the build" actions={<Button onClick={() => build.refetch()}>Try again</Button>}>
+          {build.error.message}
+        </Alert>
+      </>
     );
   const b = build.data;
 
   return (
     <>
-      <title>{`${b.name} · Builds · Boxwright`}</title>
+      <title>{workshopTitle(b.name, membership.workshopName)}</title>
       <PageHeader
         back={<Link to={paths.builds.getHref(workshopId)} className="text-accent-700 hover:underline">← Builds</Link>}
         title={b.name}

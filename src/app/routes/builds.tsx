@@ -12,7 +12,7 @@ import { BuildDialog } from '../../features/builds/components/build-dialog';
 import { BuildsTable } from '../../features/builds/components/builds-table';
 import { useDesigns } from '../../features/designs/api/get-designs';
 import { parseId } from './params';
-import { useWorkshop } from './workshop';
+import { useWorkshop, workshopTitle } from './workshop';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -31,7 +31,7 @@ export function BuildsRoute() {
 
   return (
     <>
-      <title>{`Builds · ${membership.workshopName} · Boxwright`}</title>
+      <title>{workshopTitle('Builds', membership.workshopName)}</title>
       <PageHeader
         title="Builds"
         description="The cabinets you make together, taken to a cut plan: panels on sheets, lining on rolls."

@@ -10,7 +10,7 @@ import { checklistQueryOptions, useChecklist } from '../../features/checklist/ap
 import { BuildFiles } from '../../features/checklist/components/build-files';
 import { ChecklistView } from '../../features/checklist/components/checklist-view';
 import { parseId } from './params';
-import { useWorkshop } from './workshop';
+import { useWorkshop, workshopTitle } from './workshop';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -26,7 +26,7 @@ export function ChecklistRoute() {
   const canTick = can(membership.role, 'tickParts');
   return (
     <>
-      <title>{`Checklist · ${list.data?.buildName ?? 'Cut plan'} · Boxwright`}</title>
+      <title>{workshopTitle(list.data ? `Checklist: ${list.data.buildName}` : 'Checklist', membership.workshopName)}</title>
       <PageHeader
         title={list.data ? `Checklist: ${list.data.buildName}` : 'Checklist'}
         description={canTick ? 'Tap a piece when it is cut. Every tick records who and when.' : 'Progress of the cut (your role reads it; makers tick).'}

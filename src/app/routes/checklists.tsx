@@ -5,7 +5,7 @@ import { paths } from '../../config/paths';
 import { floorPlansQueryOptions, useFloorPlans } from '../../features/checklist/api/plans';
 import { formatDateTime } from '../../lib/format';
 import { parseId } from './params';
-import { useWorkshop } from './workshop';
+import { useWorkshop, workshopTitle } from './workshop';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -20,7 +20,7 @@ export function ChecklistsRoute() {
   const plans = useFloorPlans(workshopId);
   return (
     <>
-      <title>{`Checklists · ${membership.workshopName} · Boxwright`}</title>
+      <title>{workshopTitle('Checklists', membership.workshopName)}</title>
       <PageHeader title="Build checklists" description="Pick a cut plan to tick its pieces and sheets as they are cut." />
       {plans.isPending ? <p className="text-sm text-zinc-500">Loading…</p> : null}
       {plans.isError ? <p className="text-sm text-red-700">{plans.error.message}</p> : null}

@@ -12,7 +12,7 @@ import { formatDateTime, formatNumber } from '../../lib/format';
 import { cutPlanQueryOptions, useCutPlan } from '../../features/cut-plans/api/get-cut-plans';
 import { CutPlanView } from '../../features/cut-plans/components/cut-plan-view';
 import { parseId } from './params';
-import { useWorkshop } from './workshop';
+import { useWorkshop, workshopTitle } from './workshop';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -26,18 +26,27 @@ export function CutPlanRoute() {
   const planId = parseId(useParams().planId);
   const plan = useCutPlan(workshopId, planId);
 
-  if (plan.isPending) return <Spinner label="Loading the cut plan…" />;
+  if (plan.isPending)
+    return (
+      <>
+        <title>{workshopTitle(`Cut plan ${planId}`, membership.workshopName)}</title>
+        <Spinner label="Loading the cut plan…" />
+      </>
+    );
   if (plan.isError)
     return (
-      <Alert tone="error" title="Could not load the cut plan" actions={<Button onClick={() => plan.refetch()}>Try again</Button>}>
-        {plan.error.message}
-      </Alert>
+      <>
+        <title>{workshopTitle(`Cut plan ${planId}`, membership.workshopName)}</title>
+        <Alert tone="error" title="Could not load the cut plan" actions={<Button onClick={() => plan.refetch()}>Try again</Button>}>
+          {plan.error.message}
+        </Alert>
+      </>
     );
   const p = plan.data;
   const s = p.settings;
   return (
     <>
-      <title>{`Cut plan ${p.id} · ${p.buildName} · ${membership.workshopName} · Boxwright`}</title>
+      <title>{workshopTitle(`Cut plan ${p.id}: ${p.buildName}`, membership.workshopName)}</title>
       <PageHeader
         back={
           p.buildId ? (

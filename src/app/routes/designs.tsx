@@ -11,7 +11,7 @@ import { designsQueryOptions, useDesigns } from '../../features/designs/api/get-
 import { DesignsTable } from '../../features/designs/components/designs-table';
 import { NewDesignDialog } from '../../features/designs/components/new-design-dialog';
 import { parseId } from './params';
-import { useWorkshop } from './workshop';
+import { useWorkshop, workshopTitle } from './workshop';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -30,7 +30,7 @@ export function DesignsRoute() {
 
   return (
     <>
-      <title>{`Designs · ${membership.workshopName} · Boxwright`}</title>
+      <title>{workshopTitle('Designs', membership.workshopName)}</title>
       <PageHeader
         title="Designs"
         description="Every cabinet design of this workshop."

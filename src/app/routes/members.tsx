@@ -5,7 +5,7 @@ import { PageHeader } from '../../components/layouts/app-layout';
 import { membersQueryOptions } from '../../features/workshops/api/get-members';
 import { MembersTable } from '../../features/workshops/components/members-table';
 import { parseId } from './params';
-import { useWorkshop } from './workshop';
+import { useWorkshop, workshopTitle } from './workshop';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -19,7 +19,7 @@ export function MembersRoute() {
   const canManage = can(membership.role, 'manageMembers');
   return (
     <>
-      <title>{`Members · ${membership.workshopName} · Boxwright`}</title>
+      <title>{workshopTitle('Members', membership.workshopName)}</title>
       <PageHeader
         title="Members"
         description={

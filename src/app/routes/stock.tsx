@@ -9,11 +9,13 @@ import { ImportStockCsvDialog } from '../../features/stock/components/import-sto
 import { StockFormDialog } from '../../features/stock/components/stock-form';
 import { StockTable } from '../../features/stock/components/stock-table';
 import { parseId } from './params';
-import { useWorkshop } from './workshop';
+import { requirePermission, useWorkshop, workshopTitle } from './workshop';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
-  ({ params }: LoaderFunctionArgs) => {
+  async ({ params }: LoaderFunctionArgs) => {
+    // Viewers see plans, not the stock room.
+    await requirePermission(queryClient, params, 'readStock');
     void queryClient.prefetchQuery(stockQueryOptions(parseId(params.workshopId)));
     return null;
   };
@@ -26,7 +28,7 @@ export function StockRoute() {
   const [importing, setImporting] = useState(false);
   return (
     <>
-      <title>{`Stock room · ${membership.workshopName} · Boxwright`}</title>
+      <title>{workshopTitle('Stock room', membership.workshopName)}</title>
       <PageHeader
         title="Stock room"
         description="Sheets, kept offcuts (remnants) and rolls. Cut plans use remnants before new sheets."

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { data, Outlet, redirect, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { can, type MembershipDto } from '../../../shared/schemas/api.schema';
+import { can, type MembershipDto, type Permission } from '../../../shared/schemas/api.schema';
 import { AppLayout } from '../../components/layouts/app-layout';
 import { paths } from '../../config/paths';
 import { findMembership, meQueryOptions } from '../../features/auth/api/get-me';
@@ -18,6 +18,22 @@ export const clientLoader =
     if (!findMembership(me, workshopId)) throw data('Not a member of this workshop', { status: 403 });
     return null;
   };
+
+/**
+ * A page only some roles may open (PRODUCT.md §2): other members get the calm "No access" page (403) before
+ * anything loads, instead of a form the server would refuse. The server checks every request again.
+ */
+export async function requirePermission(queryClient: QueryClient, params: LoaderFunctionArgs['params'], permission: Permission): Promise<void> {
+  const me = await queryClient.ensureQueryData(meQueryOptions());
+  const membership = findMembership(me, parseId(params.workshopId));
+  if (!membership) throw data('Not a member of this workshop', { status: 403 });
+  if (!can(membership.role, permission)) throw data(`The ${membership.role} role may not open this page`, { status: 403 });
+}
+
+/** `<title>`: the page, then the workshop, then the product. */
+export function workshopTitle(page: string, workshopName: string): string {
+  return `${page} · ${workshopName} · Boxwright`;
+}
 
 export const indexLoader = ({ params }: LoaderFunctionArgs) => redirect(paths.designs.getHref(parseId(params.workshopId)));
 
@@ -43,9 +59,10 @@ export function WorkshopRoute() {
       switchWorkshopHref={me.memberships.length > 1 ? paths.workshops.getHref() : undefined}
       nav={[
         { to: paths.designs.getHref(workshopId), label: 'Designs' },
-        { to: paths.builds.getHref(workshopId), label: 'Builds' },
+        // A cut plan and its share page belong to builds; a plan's checklist to the checklists.
+        { to: paths.builds.getHref(workshopId), label: 'Builds', alsoFor: /\/cut-plans\/\d+(\/share)?$/ },
         ...(can(membership.role, 'readStock') ? [{ to: paths.stock.getHref(workshopId), label: 'Stock room' }] : []),
-        { to: paths.checklists.getHref(workshopId), label: 'Checklists' },
+        { to: paths.checklists.getHref(workshopId), label: 'Checklists', alsoFor: /\/cut-plans\/\d+\/checklist$/ },
         { to: paths.members.getHref(workshopId), label: 'Members' },
         ...(can(membership.role, 'manageMembers')
           ? [

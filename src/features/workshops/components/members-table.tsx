@@ -9,6 +9,7 @@ import { ROLE_DESCRIPTIONS, ROLE_LABELS } from '../../../lib/roles';
 import { useMembers } from '../api/get-members';
 import { useRemoveMember } from '../api/remove-member';
 import { useUpdateMemberRole } from '../api/update-member-role';
+import { SOLE_OWNER_NOTE, soleOwnerId } from '../members';
 
 export function MembersTable({ workshopId, canManage, currentUserId }: { workshopId: number; canManage: boolean; currentUserId: number }) {
   const members = useMembers(workshopId);
@@ -17,23 +18,40 @@ export function MembersTable({ workshopId, canManage, currentUserId }: { worksho
   const [removing, setRemoving] = useState<MemberDto | null>(null);
 
   if (members.isPending) return <Spinner label="Loading members…" />;
-  if (members.isError) return <Alert tone="error" title="Could not load the members">{members.error.message}</Alert>;
+  if (members.isError)
+    return (
+      <Alert tone="error" title="Could not load the members" actions={<Button onClick={() => members.refetch()}>Try again</Button>}>
+        {members.error.message}
+      </Alert>
+    );
+  const soleOwner = soleOwnerId(members.data);
 
   return (
     <>
-      <div className="overflow-hidden rounded-xl border border-zinc-200 bg-white shadow-xs">
+      <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
         <table className="w-full text-sm">
-          <thead className="bg-zinc-50 text-left text-[13px] text-zinc-500">
+          <thead className="border-b border-zinc-200 bg-zinc-50 text-left text-[13px] text-zinc-500">
             <tr>
-              <th className="px-5 py-2.5 font-normal">E-mail</th>
-              <th className="px-5 py-2.5 font-normal">Role</th>
-              <th className="px-5 py-2.5 font-normal">May</th>
-              {canManage ? <th className="px-5 py-2.5 text-right font-normal">Actions</th> : null}
+              <th scope="col" className="px-5 py-2.5 font-normal">
+                E-mail
+              </th>
+              <th scope="col" className="px-5 py-2.5 font-normal">
+                Role
+              </th>
+              <th scope="col" className="hidden px-5 py-2.5 font-normal md:table-cell">
+                May
+              </th>
+              {canManage ? (
+                <th scope="col" className="px-5 py-2.5 font-normal">
+                  <span className="sr-only">Actions</span>
+                </th>
+              ) : null}
             </tr>
           </thead>
           <tbody className="divide-y divide-zinc-100">
             {members.data.map((member) => {
               const isMe = member.userId === currentUserId;
+              const locked = member.userId === soleOwner;
               return (
                 <tr key={member.userId} data-testid="member-row">
                   <td className="px-5 py-3 text-zinc-900">
@@ -45,7 +63,8 @@ export function MembersTable({ workshopId, canManage, currentUserId }: { worksho
                       <Select
                         aria-label={`Role of ${member.email}`}
                         value={member.role}
-                        disabled={updateRole.isPending}
+                        disabled={updateRole.isPending || locked}
+                        title={locked ? SOLE_OWNER_NOTE : undefined}
                         onChange={(event) => updateRole.mutate({ userId: member.userId, role: event.target.value as Role })}
                       >
                         {ROLES.map((role) => (
@@ -58,12 +77,18 @@ export function MembersTable({ workshopId, canManage, currentUserId }: { worksho
                       ROLE_LABELS[member.role]
                     )}
                   </td>
-                  <td className="px-5 py-3 text-zinc-500">{ROLE_DESCRIPTIONS[member.role]}</td>
+                  <td className="hidden px-5 py-3 text-zinc-500 md:table-cell">{ROLE_DESCRIPTIONS[member.role]}</td>
                   {canManage ? (
                     <td className="px-5 py-2 text-right">
-                      <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50 hover:text-red-800" onClick={() => setRemoving(member)}>
-                        Remove
-                      </Button>
+                      {locked ? (
+                        <span className="text-xs text-zinc-500" data-testid="sole-owner-note">
+                          Only owner
+                        </span>
+                      ) : (
+                        <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50 hover:text-red-800" onClick={() => setRemoving(member)}>
+                          Remove
+                        </Button>
+                      )}
                     </td>
                   ) : null}
                 </tr>
@@ -72,6 +97,7 @@ export function MembersTable({ workshopId, canManage, currentUserId }: { worksho
           </tbody>
         </table>
       </div>
+      {canManage && soleOwner !== undefined ? <p className="mt-3 text-[13px] text-zinc-500">{SOLE_OWNER_NOTE}</p> : null}
       <ConfirmDialog
         open={removing !== null}
         title="Remove this member?"
