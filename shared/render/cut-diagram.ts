@@ -162,7 +162,7 @@ export function sheetPrims(sheet: LayoutSheet, parts: ReadonlyMap<string, CutPar
   return prims;
 }
 
-function kindWord(n: NumberedSheet): string {
+function kindWord(n: Pick<NumberedSheet, 'kind'>): string {
   return n.kind === 'roll' ? 'Roll' : n.kind === 'remnant' ? 'Remnant' : 'Sheet';
 }
 
@@ -227,7 +227,8 @@ function legendPrims(lines: readonly string[], x: number, y: number, widthMm: nu
   return lines.map((l, i) => text(x + Math.floor(i / rows) * colW, y + (i % rows) * LEGEND_LINE_MM, clipText(l, colW - 2, LEGEND_MM), LEGEND_MM));
 }
 
-function sheetName(n: NumberedSheet): string {
+/** The name a person reads on the diagrams, the cut plan page and the checklist: "Sheet 2", "Remnant 1", "Roll 1". */
+export function sheetName(n: Pick<NumberedSheet, 'kind' | 'label'>): string {
   return `${kindWord(n)} ${n.kind === 'roll' ? n.label.replace('roll ', '') : n.label}`;
 }
 

@@ -500,6 +500,8 @@ export interface ChecklistSheetDto {
   groupLabel: string;
   /** 1-based within its group. */
   index: number;
+  /** Its name as on the cut plan page and the cut diagrams: "Sheet 2", "Remnant 1", "Roll 1". */
+  label: string;
   stockKind: StockKind;
   widthMm: number;
   /** On a roll: the length used. */

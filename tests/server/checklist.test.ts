@@ -53,6 +53,28 @@ describe('build checklist', () => {
     expect(list.sheets.length).toBe(plan.groups.reduce((n, g) => n + g.layout.sheets.length, 0));
   });
 
+  it('names every sheet as the cut plan and its printed diagrams do: sheets and remnants 1, 2… across materials, rolls 1…', async () => {
+    const list = await checklist();
+    const plan: CutPlanDto = (await maker.get(`/api/workshops/${wid}/cut-plans/${planId}`).expect(200)).body;
+    // The numbering of the cut-diagram PDF (DEVELOPERS.md "Drawing and exports": sheets and remnants are numbered
+    // 1, 2…, rolls roll 1…), counted here from the plan's own layouts in order.
+    const expected: string[] = [];
+    let boards = 0;
+    let rolls = 0;
+    for (const group of plan.groups) {
+      for (const sheet of group.layout.sheets) {
+        const kind = plan.stock.find((s) => s.id === sheet.stockId)?.kind ?? 'sheet';
+        expected.push(kind === 'roll' ? `Roll ${++rolls}` : `${kind === 'remnant' ? 'Remnant' : 'Sheet'} ${++boards}`);
+      }
+    }
+    expect(list.sheets.map((s) => s.label)).toEqual(expected);
+    // The 25 mm baffles' sheet comes after the 18 mm sheets, so it is not "Sheet 1" a second time.
+    const boardsLabels = list.sheets.filter((s) => s.stockKind !== 'roll').map((s) => s.label);
+    expect(new Set(boardsLabels).size).toBe(boardsLabels.length);
+    // Ticks keep their per-material keys, so marks made before this naming stay on the same sheet.
+    expect(list.sheets.every((s) => s.key.endsWith(`/${s.index}`))).toBe(true);
+  });
+
   it('a maker ticks a piece (200, who and when recorded); a viewer or designer may not (403)', async () => {
     const before = await checklist();
     const piece = before.parts[0]!;

@@ -8,6 +8,8 @@ import {
   type CutPlanGroupDto,
   type CutPlanStockDto,
 } from '../../../shared/schemas/api.schema.js';
+import { sheetName } from '../../../shared/render/cut-diagram.js';
+import { numberSheets } from '../../../shared/render/cut-list.js';
 import { AppError } from '../../errors.js';
 import { recordAudit } from '../audit/audit.service.js';
 import { CutPlan } from '../cut-plans/cut-plan.entity.js';
@@ -28,6 +30,13 @@ interface SheetRef {
 
 function sheetsOf(plan: Plan): SheetRef[] {
   const out: SheetRef[] = [];
+  // Numbered across the whole plan, as on the cut plan page and the cut diagrams (the key keeps the per-group index).
+  const names = new Map(
+    numberSheets(
+      plan.groups.map((g) => g.layout),
+      plan.stock.map((s) => ({ id: s.id, kind: s.kind })),
+    ).map((n) => [n.sheet, sheetName(n)]),
+  );
   for (const group of plan.groups) {
     group.layout.sheets.forEach((sheet, i) => {
       const stock = plan.stock.find((s) => s.id === sheet.stockId);
@@ -41,6 +50,7 @@ function sheetsOf(plan: Plan): SheetRef[] {
           key: sheetKey(group.key, i + 1),
           groupLabel: group.label,
           index: i + 1,
+          label: names.get(sheet) ?? `Sheet ${i + 1}`,
           stockKind: kind,
           widthMm: sheet.width,
           heightMm: sheet.height,
@@ -132,7 +142,7 @@ export class ChecklistService {
         }
         const sheet = sheetsOf(plan).find((s) => s.dto.key === key);
         if (!sheet) throw AppError.invalid('No such sheet in this cut plan.', { key: 'no such sheet in this cut plan' });
-        const what = `${sheet.group.label} ${sheet.dto.stockKind} ${sheet.dto.index}`;
+        const what = `${sheet.group.label} ${sheet.dto.label}`;
         const reason = `Cut plan ${planId}: ${what}`;
         if (cut && !existing) {
           const stockItemId = sheet.stock?.stockItemId ?? null;

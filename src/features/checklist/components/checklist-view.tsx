@@ -1,5 +1,6 @@
 import { useMemo, useState } from 'react';
 import type { ChecklistDto, ChecklistPartDto, ChecklistProgressDto, ChecklistSheetDto } from '../../../../shared/schemas/api.schema';
+import { CuttingCautions } from '../../../components/cut-plan/cautions';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/dialog';
 import { cn } from '../../../lib/cn';
@@ -80,23 +81,28 @@ function PieceRow({ piece, canTick, busy, onToggle }: { piece: ChecklistPartDto;
   );
 }
 
+/** "Sheet 2" as on the cut plan and the printed diagrams, then material, size, parts and the offcuts it keeps. */
 function SheetRow({ sheet, canTick, busy, onToggle }: { sheet: ChecklistSheetDto; canTick: boolean; busy: boolean; onToggle: () => void }) {
-  const kind = sheet.stockKind === 'roll' ? 'Roll length' : sheet.stockKind === 'remnant' ? 'Remnant' : 'Sheet';
+  const size =
+    sheet.stockKind === 'roll'
+      ? `${formatNumber(sheet.widthMm)} mm wide, ${formatNumber(sheet.heightMm / 1000, 2)} m used`
+      : `${formatNumber(sheet.widthMm)} × ${formatNumber(sheet.heightMm)} mm`;
   return (
-    <li className={cn('flex min-h-14 flex-wrap items-center gap-4 rounded-lg border px-4 py-2.5', sheet.cut ? 'border-accent-200 bg-accent-50' : 'border-zinc-200 bg-white')} data-testid="sheet">
+    <li className={cn('flex min-h-14 flex-wrap items-center gap-x-4 gap-y-2 rounded-lg border px-4 py-2.5', sheet.cut ? 'border-accent-200 bg-accent-50' : 'border-zinc-200 bg-white')} data-testid="sheet">
       <span className="min-w-0 flex-1">
-        <span className="block font-bold text-zinc-900">
-          {sheet.groupLabel} · {kind} {sheet.index}
-        </span>
+        <span className="block font-bold text-zinc-900">{sheet.label}</span>
         <span className="block text-[13px] text-zinc-600 tabular-nums">
-          {formatNumber(sheet.widthMm)} × {formatNumber(sheet.heightMm)} mm · {sheet.partCount} parts
-          {sheet.offcuts.length ? ` · keeps ${sheet.offcuts.map((o) => `${formatNumber(o.widthMm)} × ${formatNumber(o.heightMm)}`).join(', ')} mm` : ''}
-          {sheet.fromStockRoom ? '' : ' · typed-in stock'}
+          {sheet.groupLabel} · {size} · {sheet.partCount} parts{sheet.fromStockRoom ? '' : ' · typed-in stock'}
         </span>
+        {sheet.offcuts.length ? (
+          <span className="block text-[13px] text-zinc-600 tabular-nums">
+            keeps {sheet.offcuts.map((o) => `${formatNumber(o.widthMm)} × ${formatNumber(o.heightMm)}`).join(', ')} mm
+          </span>
+        ) : null}
         <Mark cut={sheet.cut} />
       </span>
       {canTick ? (
-        <Button variant={sheet.cut ? 'secondary' : 'primary'} className="h-12 min-w-36 text-base" busy={busy} onClick={onToggle}>
+        <Button variant={sheet.cut ? 'secondary' : 'primary'} className="h-12 min-w-32 text-base" busy={busy} onClick={onToggle}>
           {sheet.cut ? 'Undo' : 'Mark cut'}
         </Button>
       ) : sheet.cut ? (
@@ -122,15 +128,31 @@ export function ChecklistView({ workshopId, list, canTick }: { workshopId: numbe
   }, [list.parts, show]);
   const busyKey = tick.isPending ? tick.variables?.key : undefined;
 
+  // On a tablet (one column) the sheets and cautions come before the long list of pieces: a sheet is cut first.
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
-      <div className="min-w-0 space-y-6">
-        <section aria-label="Progress" className="space-y-3 rounded-xl border border-zinc-200 bg-white p-5 shadow-xs">
-          <Progress progress={list.total} large />
-          {list.cabinets.map((c) => (
-            <Progress key={c.label} progress={c} />
-          ))}
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem] lg:items-start">
+      <section aria-label="Progress" className="space-y-3 rounded-xl border border-zinc-200 bg-white p-5 shadow-xs lg:col-start-1 lg:row-start-1">
+        <Progress progress={list.total} large />
+        {list.cabinets.map((c) => (
+          <Progress key={c.label} progress={c} />
+        ))}
+      </section>
+      <aside className="space-y-6 lg:col-start-2 lg:row-span-2 lg:row-start-1">
+        <section aria-label="Sheets">
+          <h2 className="mb-1 text-lg font-bold text-zinc-900">Sheets</h2>
+          <p className="mb-3 text-[13px] text-zinc-500">Marking a sheet cut takes it out of the stock room and keeps its offcuts as remnants. Undo puts it back.</p>
+          <div className="mb-3">
+            <Progress progress={list.sheetsProgress} />
+          </div>
+          <ul className="grid gap-2 md:max-lg:grid-cols-2">
+            {list.sheets.map((s) => (
+              <SheetRow key={s.key} sheet={s} canTick={canTick} busy={busyKey === s.key} onToggle={() => (s.cut ? tick.mutate({ item: 'sheet', key: s.key, cut: false }) : setConfirmSheet(s))} />
+            ))}
+          </ul>
         </section>
+        <CuttingCautions narrow />
+      </aside>
+      <div className="min-w-0 lg:col-start-1 lg:row-start-2">
         <section aria-label="Pieces">
           <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
             <h2 className="text-lg font-bold text-zinc-900">Pieces</h2>
@@ -154,7 +176,6 @@ export function ChecklistView({ workshopId, list, canTick }: { workshopId: numbe
               ))}
             </div>
           </div>
-          {tick.isError ? <p role="alert" className="mb-3 rounded-md bg-red-50 px-3 py-2 text-sm text-red-800">{tick.error.message}</p> : null}
           {byCabinet.length === 0 ? <p className="rounded-lg border border-dashed border-zinc-300 px-4 py-8 text-center text-zinc-500">{show === 'open' ? 'Every piece is cut.' : 'Nothing here yet.'}</p> : null}
           {byCabinet.map(([cabinet, pieces]) => (
             <div key={cabinet} className="mb-5">
@@ -168,30 +189,6 @@ export function ChecklistView({ workshopId, list, canTick }: { workshopId: numbe
           ))}
         </section>
       </div>
-      <aside className="space-y-6">
-        <section aria-label="Sheets">
-          <h2 className="mb-1 text-lg font-bold text-zinc-900">Sheets</h2>
-          <p className="mb-3 text-[13px] text-zinc-500">Marking a sheet cut takes it out of the stock room and keeps its offcuts as remnants. Undo puts it back.</p>
-          <div className="mb-3">
-            <Progress progress={list.sheetsProgress} />
-          </div>
-          <ul className="space-y-2">
-            {list.sheets.map((s) => (
-              <SheetRow key={s.key} sheet={s} canTick={canTick} busy={busyKey === s.key} onToggle={() => (s.cut ? tick.mutate({ item: 'sheet', key: s.key, cut: false }) : setConfirmSheet(s))} />
-            ))}
-          </ul>
-        </section>
-        <section aria-label="Cautions" className="rounded-xl border border-amber-200 bg-amber-50 p-4 text-[13px] leading-relaxed text-amber-900">
-          <h2 className="mb-1 font-bold">Before you cut</h2>
-          <ul className="list-disc space-y-1 pl-4">
-            <li>Cutting MDF and other boards makes fine dust that is harmful to breathe: use dust extraction and a suitable mask.</li>
-            <li>Lining fibres irritate skin and eyes: wear gloves and long sleeves when cutting batt.</li>
-            <li>Keep guards in place and hands clear of the blade; use push sticks on narrow parts.</li>
-            <li>Full sheets are heavy: lift with two people or a trolley.</li>
-            <li>Follow your local regulations and the tool maker's instructions.</li>
-          </ul>
-        </section>
-      </aside>
       <ConfirmDialog
         open={confirmSheet !== null}
         title="Mark this sheet cut?"
@@ -201,7 +198,7 @@ export function ChecklistView({ workshopId, list, canTick }: { workshopId: numbe
         onConfirm={() => confirmSheet && tick.mutate({ item: 'sheet', key: confirmSheet.key, cut: true }, { onSettled: () => setConfirmSheet(null) })}
       >
         {confirmSheet
-          ? `${confirmSheet.groupLabel} ${confirmSheet.stockKind} ${confirmSheet.index}${confirmSheet.fromStockRoom ? ' is taken out of the stock room' : ''}${confirmSheet.offcuts.length ? `, and ${confirmSheet.offcuts.length} offcut${confirmSheet.offcuts.length === 1 ? ' is' : 's are'} kept as remnants` : ''}.`
+          ? `${confirmSheet.label} (${confirmSheet.groupLabel}) is marked cut${confirmSheet.fromStockRoom ? ' and taken out of the stock room' : ''}${confirmSheet.offcuts.length ? `; ${confirmSheet.offcuts.length} offcut${confirmSheet.offcuts.length === 1 ? ' is' : 's are'} kept as remnants` : ''}.`
           : null}
       </ConfirmDialog>
     </div>

@@ -13,7 +13,7 @@ import { applyApiError } from '../../../lib/form-errors';
 import { formatNumber } from '../../../lib/format';
 import { numberInput } from '../../../lib/number-input';
 import { useStockRoom } from '../api/get-stock-room';
-import { isFinished, useCancelNestJob, useNestJob, useStartNestJob } from '../api/nest-jobs';
+import { isFinished, jobReadProblem, useCancelNestJob, useNestJob, useStartNestJob } from '../api/nest-jobs';
 import { NestProgress } from './nest-progress';
 
 /** The form: settings as the API takes them, the search time in seconds, and whether the stock is typed in. */
@@ -83,7 +83,8 @@ export function MakeCutPlan({ workshopId, buildId, canReadStock, onDone }: { wor
     if (job.data?.status === 'done' && result?.cutPlanId) onDone(result.cutPlanId);
   }, [job.data, onDone]);
 
-  const running = jobId !== null && !isFinished(job.data);
+  const problem = jobReadProblem(job.isError ? job.error : null);
+  const running = jobId !== null && !isFinished(job.data) && problem !== 'lost';
 
   const onSubmit = handleSubmit(async (values) => {
     const settings: CutPlanSettingsInput = {
@@ -218,17 +219,29 @@ export function MakeCutPlan({ workshopId, buildId, canReadStock, onDone }: { wor
           </Field>
         </fieldset>
 
-        {job.data ? (
+        {job.data && problem !== 'lost' ? (
           <NestProgress job={job.data} cancelling={cancel.isPending} onCancel={() => jobId && cancel.mutate(jobId)} />
+        ) : null}
+        {problem === 'offline' && running ? (
+          <Alert tone="warning" title="Lost contact with the server" actions={<Button onClick={() => job.refetch()} busy={job.isFetching}>Check again</Button>}>
+            The cut plan may still be in the works. Check the connection, then check again.
+          </Alert>
+        ) : null}
+        {problem === 'lost' ? (
+          <Alert tone="warning" title="This cut plan was not finished">
+            The server restarted while it was working on it. Make the cut plan again.
+          </Alert>
         ) : null}
         {job.data?.status === 'failed' ? <Alert tone="error">{job.data.error?.message ?? 'The nesting stopped with an error.'}</Alert> : null}
         {job.data?.status === 'done' ? <Alert tone="success">Cut plan ready — opening it…</Alert> : null}
 
-        <div className="flex justify-end">
-          <Button type="submit" variant="primary" busy={start.isPending} disabled={running}>
-            {job.data && isFinished(job.data) && job.data.status !== 'done' ? 'Try again' : 'Make cut plan'}
-          </Button>
-        </div>
+        {running ? null : (
+          <div className="flex justify-end">
+            <Button type="submit" variant="primary" busy={start.isPending}>
+              {(job.data && isFinished(job.data) && job.data.status !== 'done') || problem === 'lost' ? 'Try again' : 'Make cut plan'}
+            </Button>
+          </div>
+        )}
       </form>
     </Card>
   );

@@ -2,7 +2,7 @@ import type { NestJobDto } from '../../../../shared/schemas/api.schema';
 import { Button } from '../../../components/ui/button';
 
 const STATUS_WORDS: Record<NestJobDto['status'], string> = {
-  queued: 'Waiting for a free worker…',
+  queued: 'Waiting to start (another plan is being worked out)…',
   running: 'Laying out the parts…',
   done: 'Done',
   failed: 'Stopped with an error',

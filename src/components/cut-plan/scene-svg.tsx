@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { Prim } from '../../../../shared/render/scene';
+import type { Prim } from '../../../shared/render/scene';
 
 const ANCHOR = { left: 'start', center: 'middle', right: 'end' } as const;
 

@@ -1,28 +1,48 @@
-import type { CutPlanPartDto, CutPlanStockDto } from '../../../../shared/schemas/api.schema';
-import type { LayoutSheet } from '../../../../shared/schemas/nest.schema';
-import { sheetPrims, sheetUtilisation } from '../../../../shared/render/cut-diagram';
-import { placedArea } from '../../../../shared/render/cut-list';
-import { formatNumber } from '../../../lib/format';
+import type { CutPlanPartDto, CutPlanStockDto } from '../../../shared/schemas/api.schema';
+import type { LayoutSheet } from '../../../shared/schemas/nest.schema';
+import { sheetPrims, sheetUtilisation } from '../../../shared/render/cut-diagram';
+import { placedArea } from '../../../shared/render/cut-list';
+import { formatNumber } from '../../lib/format';
 import { SceneSvg } from './scene-svg';
 
 const pct = (v: number) => `${formatNumber(v * 100)} %`;
 const m2 = (mm2: number) => `${formatNumber(mm2 / 1e6, 2)} m²`;
 
+/** One line of the cut order in words: saw terms on boards, plain ones on a roll cut with a knife. */
+export function cutWords(cut: { kind: string; x1: number; y1: number; x2: number; y2: number }, onRoll: boolean): string {
+  const what = onRoll ? (cut.kind === 'rip' ? 'Cut along the roll' : 'Cut across the roll') : cut.kind === 'rip' ? 'Rip cut' : 'Cross cut';
+  const where = cut.x1 === cut.x2 ? `x ${formatNumber(cut.x1)}` : `y ${formatNumber(cut.y1)}`;
+  return `${what}, ${formatNumber(Math.hypot(cut.x2 - cut.x1, cut.y2 - cut.y1))} mm long, at ${where}`;
+}
+
 /**
  * One sheet or roll of the plan, drawn to scale with the parts labelled (number, name, size, cabinet), the
  * numbered guillotine cuts and the hatched offcuts (the same drawing as the cut-diagram PDF), with its
- * legend, cut order and offcuts beside it.
+ * legend, cut order and offcuts beside it. `materialLabel` ("MDF 18 mm") names the material when the stock
+ * is not known (a shared plan hides the stock).
  */
-export function SheetCard({ label, sheet, parts, stock }: { label: string; sheet: LayoutSheet; parts: ReadonlyMap<string, CutPlanPartDto>; stock: CutPlanStockDto | undefined }) {
-  const isRoll = sheet.kind === 'roll';
+export function SheetCard({
+  label,
+  sheet,
+  parts,
+  stock,
+  materialLabel,
+}: {
+  label: string;
+  sheet: LayoutSheet;
+  parts: ReadonlyMap<string, CutPlanPartDto>;
+  stock: CutPlanStockDto | undefined;
+  materialLabel?: string;
+}) {
+  const isRoll = (sheet.kind ?? stock?.kind) === 'roll';
   const textMm = Math.max(12, Math.min(40, Math.max(sheet.width, sheet.height) / 80));
   const pad = textMm * 0.5;
   const prims = sheetPrims(sheet, parts, pad, pad, 1, { textMm, lineScale: textMm / 3 }, stock?.trimMm ?? 0);
   const offcutArea = (sheet.offcuts ?? []).reduce((a, o) => a + o.width * o.height, 0);
   const waste = Math.max(0, sheet.width * sheet.height - placedArea(sheet) - offcutArea);
-  const title = isRoll
-    ? `${label} · ${stock?.material ?? ''} ${formatNumber(stock?.thicknessMm ?? 0)} mm · ${formatNumber(sheet.width)} mm wide, ${formatNumber(sheet.height / 1000, 2)} m used`
-    : `${label} · ${stock?.material ?? ''} ${formatNumber(stock?.thicknessMm ?? 0)} mm · ${formatNumber(sheet.width)} × ${formatNumber(sheet.height)} mm`;
+  const material = stock ? `${stock.material} ${formatNumber(stock.thicknessMm)} mm` : (materialLabel ?? '');
+  const size = isRoll ? `${formatNumber(sheet.width)} mm wide, ${formatNumber(sheet.height / 1000, 2)} m used` : `${formatNumber(sheet.width)} × ${formatNumber(sheet.height)} mm`;
+  const title = [label, material, size].filter(Boolean).join(' · ');
   const cuts = [...sheet.cuts].sort((a, b) => a.order - b.order);
 
   return (
@@ -45,8 +65,11 @@ export function SheetCard({ label, sheet, parts, stock }: { label: string; sheet
         />
         <div className="space-y-4 text-[13px]">
           <section>
-            <h4 className="mb-1 font-bold text-zinc-800">Parts</h4>
-            <ol className="max-h-64 space-y-0.5 overflow-y-auto pr-1">
+            <h4 className="mb-1 font-bold text-zinc-800">
+              Parts <span className="font-normal text-zinc-500">({sheet.placements.length})</span>
+            </h4>
+            {/* Long lists scroll inside the card; tabIndex lets the keyboard scroll them too. */}
+            <ol className="max-h-64 space-y-0.5 overflow-y-auto rounded pr-1" tabIndex={0} aria-label={`Parts on ${label}`}>
               {sheet.placements.map((p, i) => {
                 const part = parts.get(p.partId);
                 const [w, h] = p.rotated ? [p.height, p.width] : [p.width, p.height];
@@ -68,12 +91,13 @@ export function SheetCard({ label, sheet, parts, stock }: { label: string; sheet
           </section>
           {cuts.length > 0 ? (
             <section>
-              <h4 className="mb-1 font-bold text-zinc-800">Cut order</h4>
-              <ol className="max-h-48 space-y-0.5 overflow-y-auto pr-1 tabular-nums text-zinc-700">
+              <h4 className="mb-1 font-bold text-zinc-800">
+                Cut order <span className="font-normal text-zinc-500">({cuts.length} cuts)</span>
+              </h4>
+              <ol className="max-h-48 space-y-0.5 overflow-y-auto rounded pr-1 tabular-nums text-zinc-700" tabIndex={0} aria-label={`Cut order of ${label}`}>
                 {cuts.map((c) => (
                   <li key={c.order}>
-                    <span className="inline-block w-6 text-right text-red-700">{c.order}.</span> {c.kind === 'rip' ? 'Rip' : 'Cross'} cut,{' '}
-                    {formatNumber(Math.hypot(c.x2 - c.x1, c.y2 - c.y1))} mm long, at {c.x1 === c.x2 ? `x ${formatNumber(c.x1)}` : `y ${formatNumber(c.y1)}`}
+                    <span className="inline-block w-6 text-right text-red-700">{c.order}.</span> {cutWords(c, isRoll)}
                   </li>
                 ))}
               </ol>
