@@ -34,7 +34,21 @@ export function ResetPasswordRoute() {
   const token = useParams().token ?? '';
   const navigate = useNavigate();
   return (
-    <AuthLayout title="Choose a new password">
+    <AuthLayout
+      title="Choose a new password"
+      footer={
+        <>
+          {/* A used or expired link ends here: the way on is a new link. */}
+          <Link to={paths.forgotPassword.getHref()} className="text-accent-700 hover:underline">
+            Ask for a new link
+          </Link>
+          <span className="mx-2 text-zinc-300">·</span>
+          <Link to={paths.signIn.getHref()} className="text-accent-700 hover:underline">
+            Back to sign-in
+          </Link>
+        </>
+      }
+    >
       <ResetPasswordForm
         token={token}
         onDone={() => {
@@ -51,7 +65,16 @@ export function InviteRoute() {
   const navigate = useNavigate();
   const me = useQuery(meQueryOptions()).data ?? null;
   return (
-    <AuthLayout title="Join a workshop">
+    <AuthLayout
+      title="Join a workshop"
+      footer={
+        me ? null : (
+          <Link to={paths.signIn.getHref()} className="text-accent-700 hover:underline">
+            Go to sign-in
+          </Link>
+        )
+      }
+    >
       <AcceptInvitation
         token={token}
         me={me}

@@ -8,6 +8,7 @@ import { Button } from '../../components/ui/button';
 import { Card } from '../../components/ui/card';
 import { ConfirmDialog } from '../../components/ui/dialog';
 import { Spinner } from '../../components/ui/spinner';
+import { LoadError } from '../../components/ui/states';
 import { paths } from '../../config/paths';
 import { formatDateTime, formatNumber, formatRelativeTime } from '../../lib/format';
 import { notify } from '../../lib/notify';
@@ -53,9 +54,7 @@ export function BuildRoute() {
     return (
       <>
         <title>{workshopTitle('Build', membership.workshopName)}</title>
-        <Alert tone="error" title="Could not load the build" actions={<Button onClick={() => build.refetch()}>Try again</Button>}>
-          {build.error.message}
-        </Alert>
+        <LoadError what="the build" error={build.error} onRetry={() => build.refetch()} />
       </>
     );
   const b = build.data;

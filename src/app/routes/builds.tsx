@@ -3,9 +3,9 @@ import { useState } from 'react';
 import { useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
 import { can } from '../../../shared/schemas/api.schema';
 import { PageHeader } from '../../components/layouts/app-layout';
-import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { Spinner } from '../../components/ui/spinner';
+import { EmptyState, LoadError } from '../../components/ui/states';
 import { paths } from '../../config/paths';
 import { buildsQueryOptions, useBuilds } from '../../features/builds/api/get-builds';
 import { BuildDialog } from '../../features/builds/components/build-dialog';
@@ -45,11 +45,25 @@ export function BuildsRoute() {
       />
       {builds.isPending ? <Spinner label="Loading builds…" /> : null}
       {builds.isError ? (
-        <Alert tone="error" title="Could not load the builds" actions={<Button onClick={() => builds.refetch()}>Try again</Button>}>
-          {builds.error.message}
-        </Alert>
+        <LoadError what="the builds" error={builds.error} onRetry={() => builds.refetch()} />
       ) : null}
-      {builds.data ? <BuildsTable builds={builds.data} buildHref={(id) => paths.build.getHref(workshopId, id)} /> : null}
+      {builds.data?.length === 0 ? (
+        <EmptyState
+          title="No builds yet"
+          action={
+            canEdit && designs.data?.length ? (
+              <Button variant="primary" onClick={() => setCreating(true)}>
+                New build
+              </Button>
+            ) : undefined
+          }
+        >
+          A build is the set of cabinets you make together: choose designs and how many of each, then make its cut plan.
+          {canEdit && designs.data?.length === 0 ? ' Make a design first.' : ''}
+        </EmptyState>
+      ) : builds.data ? (
+        <BuildsTable builds={builds.data} buildHref={(id) => paths.build.getHref(workshopId, id)} />
+      ) : null}
       {canEdit && designs.data ? (
         <BuildDialog
           workshopId={workshopId}

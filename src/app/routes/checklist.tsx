@@ -5,6 +5,8 @@ import { HistoryList } from '../../components/history/history-list';
 import { PageHeader } from '../../components/layouts/app-layout';
 import { ButtonLink } from '../../components/ui/button';
 import { Card } from '../../components/ui/card';
+import { Spinner } from '../../components/ui/spinner';
+import { LoadError } from '../../components/ui/states';
 import { paths } from '../../config/paths';
 import { checklistQueryOptions, useChecklist } from '../../features/checklist/api/checklist';
 import { BuildFiles } from '../../features/checklist/components/build-files';
@@ -37,8 +39,8 @@ export function ChecklistRoute() {
           ) : null
         }
       />
-      {list.isPending ? <p className="text-sm text-zinc-500">Loading the checklist…</p> : null}
-      {list.isError ? <p className="text-sm text-red-700">{list.error.message}</p> : null}
+      {list.isPending ? <Spinner label="Loading the checklist…" /> : null}
+      {list.isError ? <LoadError what="the checklist" error={list.error} onRetry={() => list.refetch()} /> : null}
       {list.data ? <ChecklistView workshopId={workshopId} list={list.data} canTick={canTick} /> : null}
       <div className="mt-8 grid gap-6 lg:grid-cols-2">
         {list.data?.buildId ? (

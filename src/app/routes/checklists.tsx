@@ -1,6 +1,9 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { Link, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '../../components/layouts/app-layout';
+import { ButtonLink } from '../../components/ui/button';
+import { Spinner } from '../../components/ui/spinner';
+import { EmptyState, LoadError } from '../../components/ui/states';
 import { paths } from '../../config/paths';
 import { floorPlansQueryOptions, useFloorPlans } from '../../features/checklist/api/plans';
 import { formatDateTime } from '../../lib/format';
@@ -22,9 +25,20 @@ export function ChecklistsRoute() {
     <>
       <title>{workshopTitle('Checklists', membership.workshopName)}</title>
       <PageHeader title="Build checklists" description="Pick a cut plan to tick its pieces and sheets as they are cut." />
-      {plans.isPending ? <p className="text-sm text-zinc-500">Loading…</p> : null}
-      {plans.isError ? <p className="text-sm text-red-700">{plans.error.message}</p> : null}
-      {plans.data?.length === 0 ? <p className="text-sm text-zinc-500">No cut plans yet: make one from a build.</p> : null}
+      {plans.isPending ? <Spinner label="Loading the cut plans…" /> : null}
+      {plans.isError ? <LoadError what="the cut plans" error={plans.error} onRetry={() => plans.refetch()} /> : null}
+      {plans.data?.length === 0 ? (
+        <EmptyState
+          title="No cut plans yet"
+          action={
+            <ButtonLink to={paths.builds.getHref(workshopId)} variant="primary">
+              Go to builds
+            </ButtonLink>
+          }
+        >
+          A checklist comes with every cut plan. Make a cut plan from a build first.
+        </EmptyState>
+      ) : null}
       <ul className="grid gap-3 md:grid-cols-2">
         {plans.data?.map((p) => (
           <li key={p.id}>

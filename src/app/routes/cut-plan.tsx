@@ -1,12 +1,12 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '../../components/layouts/app-layout';
-import { Alert } from '../../components/ui/alert';
-import { Button, ButtonLink } from '../../components/ui/button';
+import { ButtonLink } from '../../components/ui/button';
 import { Card } from '../../components/ui/card';
 import { HistoryList } from '../../components/history/history-list';
 import { can } from '../../../shared/schemas/api.schema';
 import { Spinner } from '../../components/ui/spinner';
+import { LoadError } from '../../components/ui/states';
 import { paths } from '../../config/paths';
 import { formatDateTime, formatNumber } from '../../lib/format';
 import { cutPlanQueryOptions, useCutPlan } from '../../features/cut-plans/api/get-cut-plans';
@@ -37,9 +37,7 @@ export function CutPlanRoute() {
     return (
       <>
         <title>{workshopTitle(`Cut plan ${planId}`, membership.workshopName)}</title>
-        <Alert tone="error" title="Could not load the cut plan" actions={<Button onClick={() => plan.refetch()}>Try again</Button>}>
-          {plan.error.message}
-        </Alert>
+        <LoadError what="the cut plan" error={plan.error} onRetry={() => plan.refetch()} />
       </>
     );
   const p = plan.data;

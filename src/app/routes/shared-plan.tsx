@@ -2,6 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { Brand } from '../../components/layouts/brand';
 import { Alert } from '../../components/ui/alert';
+import { Button } from '../../components/ui/button';
 import { sharedPlanQueryOptions } from '../../features/share/api/share-links';
 import { SharedPlanView } from '../../features/share/components/shared-plan-view';
 import { isApiError } from '../../lib/api-client';
@@ -24,8 +25,13 @@ export function SharedPlanRoute() {
         <title>{`${plan.data?.buildName ?? 'Shared cut plan'} · Boxwright`}</title>
         {plan.isPending ? <p className="text-sm text-zinc-500">Opening the cut plan…</p> : null}
         {plan.isError ? (
-          <Alert tone="error" title="This link cannot be opened">
-            {isApiError(plan.error) ? plan.error.message : 'Please try again.'}
+          <Alert
+            tone={isApiError(plan.error) && plan.error.status === 0 ? 'warning' : 'error'}
+            title="This link cannot be opened"
+            actions={isApiError(plan.error) && plan.error.status === 0 ? <Button onClick={() => plan.refetch()}>Try again</Button> : undefined}
+          >
+            {isApiError(plan.error) ? plan.error.message : 'Please try again.'}{' '}
+            {isApiError(plan.error) && plan.error.status !== 0 ? 'Shared links expire and can be withdrawn: ask the person who sent it for a new one.' : ''}
           </Alert>
         ) : null}
         {plan.data ? (

@@ -4,6 +4,8 @@ import type { LoaderFunctionArgs } from 'react-router-dom';
 import { can, type StockItemDto } from '../../../shared/schemas/api.schema';
 import { PageHeader } from '../../components/layouts/app-layout';
 import { Button, buttonClasses } from '../../components/ui/button';
+import { Spinner } from '../../components/ui/spinner';
+import { LoadError } from '../../components/ui/states';
 import { stockCsvHref, stockQueryOptions, useStock } from '../../features/stock/api/stock';
 import { ImportStockCsvDialog } from '../../features/stock/components/import-stock-csv';
 import { StockFormDialog } from '../../features/stock/components/stock-form';
@@ -48,8 +50,8 @@ export function StockRoute() {
           </>
         }
       />
-      {stock.isPending ? <p className="text-sm text-zinc-500">Loading the stock room…</p> : null}
-      {stock.isError ? <p className="text-sm text-red-700">{stock.error.message}</p> : null}
+      {stock.isPending ? <Spinner label="Loading the stock room…" /> : null}
+      {stock.isError ? <LoadError what="the stock room" error={stock.error} onRetry={() => stock.refetch()} /> : null}
       {stock.data ? <StockTable workshopId={workshopId} items={stock.data} canManage={canManage} onEdit={setEditing} /> : null}
       <p className="mt-4 max-w-3xl text-[13px] text-zinc-500">
         Full sheets are heavy and awkward (a 2440 × 1220 mm sheet of 18 mm MDF weighs about 40 kg): carry them with two people or a sheet

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { AuditEventDto, ListDto } from '../../../shared/schemas/api.schema';
 import { api } from '../../lib/api-client';
 import { formatDateTime, formatRelativeTime } from '../../lib/format';
+import { LoadError } from '../ui/states';
 
 export const historyKeys = {
   all: ['history'] as const,
@@ -18,7 +19,7 @@ export const historyQueryOptions = (workshopId: number, subjectType: string, sub
 export function HistoryList({ workshopId, subjectType, subjectId, limit = 8 }: { workshopId: number; subjectType: 'design' | 'plan' | 'stock' | 'build'; subjectId: number; limit?: number }) {
   const history = useQuery(historyQueryOptions(workshopId, subjectType, subjectId));
   if (history.isPending) return <p className="text-sm text-zinc-500">Loading history…</p>;
-  if (history.isError) return <p className="text-sm text-red-700">The history could not be loaded.</p>;
+  if (history.isError) return <LoadError what="the history" error={history.error} onRetry={() => history.refetch()} />;
   const items = history.data.slice(0, limit);
   if (items.length === 0) return <p className="text-sm text-zinc-500">No changes recorded yet.</p>;
   return (

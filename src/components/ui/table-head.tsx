@@ -6,6 +6,11 @@ export function isNumericColumn(meta: unknown): boolean {
   return Boolean((meta as { numeric?: boolean } | undefined)?.numeric);
 }
 
+/** Extra classes for a column's header and cells (`meta: { className: 'hidden xl:table-cell' }` hides it on a tablet). */
+export function columnClassName(meta: unknown): string | undefined {
+  return (meta as { className?: string } | undefined)?.className;
+}
+
 /** The header of a TanStack table: sortable columns are buttons, and `aria-sort` tells the order. */
 export function SortableTableHead<T>({ table, cellClassName = 'px-5 py-2.5' }: { table: Table<T>; cellClassName?: string }) {
   return (
@@ -19,7 +24,12 @@ export function SortableTableHead<T>({ table, cellClassName = 'px-5 py-2.5' }: {
                 key={header.id}
                 scope="col"
                 aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                className={cn(cellClassName, 'font-normal whitespace-nowrap', isNumericColumn(header.column.columnDef.meta) && 'text-right')}
+                className={cn(
+                  cellClassName,
+                  'font-normal whitespace-nowrap',
+                  isNumericColumn(header.column.columnDef.meta) && 'text-right',
+                  columnClassName(header.column.columnDef.meta),
+                )}
               >
                 {header.column.getCanSort() ? (
                   <button

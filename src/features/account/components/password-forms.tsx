@@ -33,7 +33,12 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
   const reset = useResetPassword(token);
   const { register, handleSubmit, setError, formState } = useForm<{ password: string }>({ resolver: zodResolver(passwordResetInput), defaultValues: { password: '' } });
   if (link.isPending) return <p className="text-sm text-zinc-500">Checking the link…</p>;
-  if (link.isError) return <Alert tone="error" title="This link cannot be used">{isApiError(link.error) ? link.error.message : 'Please try again.'}</Alert>;
+  if (link.isError)
+    return (
+      <Alert tone="error" title="This link cannot be used" actions={link.error.status === 0 ? <Button onClick={() => link.refetch()}>Try again</Button> : undefined}>
+        {isApiError(link.error) ? link.error.message : 'Please try again.'} {link.error.status === 0 ? '' : 'A link works once, for one hour: ask for a new one below.'}
+      </Alert>
+    );
   return (
     <form noValidate className="space-y-4" onSubmit={handleSubmit((v) => reset.mutate(v.password, { onSuccess: onDone, onError: (e) => applyApiError(e, setError) }))}>
       <p className="text-sm text-zinc-600">New password for {link.data.email}.</p>

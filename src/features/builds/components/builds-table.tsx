@@ -3,21 +3,18 @@ import type { BuildDto } from '../../../../shared/schemas/api.schema';
 import { formatDateTime, formatRelativeTime } from '../../../lib/format';
 import { describeBuildLine } from './build-lines';
 
-/** Every build of the workshop: what it makes, how many cabinets, its cut plans. */
+/** Every build of the workshop: what it makes, how many cabinets, its cut plans (the page says when there are none). */
 export function BuildsTable({ builds, buildHref }: { builds: BuildDto[]; buildHref: (buildId: number) => string }) {
-  if (builds.length === 0) {
-    return <p className="rounded-xl border border-dashed border-zinc-300 bg-white px-5 py-8 text-center text-sm text-zinc-500">No builds yet.</p>;
-  }
   return (
     <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
       <table className="w-full text-sm">
-        <thead className="border-b border-zinc-200 bg-zinc-50 text-left text-xs text-zinc-500">
+        <thead className="border-b border-zinc-200 bg-zinc-50 text-left text-[13px] text-zinc-500">
           <tr>
-            <th className="px-4 py-2.5 font-normal">Build</th>
-            <th className="px-4 py-2.5 font-normal">Cabinets</th>
-            <th className="px-4 py-2.5 text-right font-normal">Total</th>
-            <th className="px-4 py-2.5 text-right font-normal">Cut plans</th>
-            <th className="px-4 py-2.5 font-normal">Updated</th>
+            <th scope="col" className="px-4 py-2.5 font-normal">Build</th>
+            <th scope="col" className="px-4 py-2.5 font-normal">Cabinets</th>
+            <th scope="col" className="px-4 py-2.5 text-right font-normal">Total</th>
+            <th scope="col" className="px-4 py-2.5 text-right font-normal">Cut plans</th>
+            <th scope="col" className="hidden px-4 py-2.5 font-normal md:table-cell">Updated</th>
           </tr>
         </thead>
         <tbody className="divide-y divide-zinc-100">
@@ -38,7 +35,7 @@ export function BuildsTable({ builds, buildHref }: { builds: BuildDto[]; buildHr
               </td>
               <td className="px-4 py-3 text-right align-top tabular-nums">{b.cabinetCount}</td>
               <td className="px-4 py-3 text-right align-top tabular-nums">{b.cutPlanCount}</td>
-              <td className="px-4 py-3 align-top whitespace-nowrap text-zinc-600" title={formatDateTime(b.updatedAt)}>
+              <td className="hidden px-4 py-3 align-top whitespace-nowrap text-zinc-600 md:table-cell" title={formatDateTime(b.updatedAt)}>
                 {formatRelativeTime(b.updatedAt)}
                 {b.updatedBy ? <span className="block text-xs text-zinc-400">{b.updatedBy}</span> : null}
               </td>

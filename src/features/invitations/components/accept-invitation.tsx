@@ -23,8 +23,13 @@ export function AcceptInvitation({ token, me, signInHref, onJoined }: { token: s
   if (preview.isPending) return <p className="text-sm text-zinc-500">Checking the invitation…</p>;
   if (preview.isError) {
     return (
-      <Alert tone="error" title="This invitation cannot be used">
-        {isApiError(preview.error) ? preview.error.message : 'Please try again.'}
+      <Alert
+        tone="error"
+        title="This invitation cannot be used"
+        actions={preview.error.status === 0 ? <Button onClick={() => preview.refetch()}>Try again</Button> : undefined}
+      >
+        {isApiError(preview.error) ? preview.error.message : 'Please try again.'}{' '}
+        {preview.error.status === 0 ? '' : "An invitation works once, for 7 days: ask the workshop's owner to send a new one."}
       </Alert>
     );
   }

@@ -1,6 +1,8 @@
 import type { InvitationDto } from '../../../../shared/schemas/api.schema';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
+import { Spinner } from '../../../components/ui/spinner';
+import { LoadError } from '../../../components/ui/states';
 import { formatDateTime, formatRelativeTime } from '../../../lib/format';
 import { ROLE_LABELS } from '../../../lib/roles';
 import { useInvitations, useRevokeInvitation } from '../api/invitations';
@@ -15,9 +17,9 @@ const STATUS: Record<InvitationDto['status'], { label: string; tone: 'neutral' |
 export function InvitationsList({ workshopId }: { workshopId: number }) {
   const list = useInvitations(workshopId);
   const revoke = useRevokeInvitation(workshopId);
-  if (list.isPending) return <p className="text-sm text-zinc-500">Loading…</p>;
-  if (list.isError) return <p className="text-sm text-red-700">{list.error.message}</p>;
-  if (list.data.length === 0) return <p className="text-sm text-zinc-500">No invitations yet.</p>;
+  if (list.isPending) return <Spinner label="Loading invitations…" />;
+  if (list.isError) return <LoadError what="the invitations" error={list.error} onRetry={() => list.refetch()} />;
+  if (list.data.length === 0) return <p className="text-sm text-zinc-500">No invitations yet. Invite someone above; the invitation shows here until it is used.</p>;
   return (
     <ul className="divide-y divide-zinc-100" data-testid="invitations">
       {list.data.map((inv) => (

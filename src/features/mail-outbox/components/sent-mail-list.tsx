@@ -1,6 +1,8 @@
 import { useState } from 'react';
 import type { MailMessageDto } from '../../../../shared/schemas/api.schema';
 import { Badge } from '../../../components/ui/badge';
+import { Spinner } from '../../../components/ui/spinner';
+import { EmptyState, LoadError } from '../../../components/ui/states';
 import { formatDateTime, formatRelativeTime } from '../../../lib/format';
 import { useSentMail } from '../api/get-sent-mail';
 
@@ -33,14 +35,14 @@ function MessageText({ text }: { text: string }) {
 export function SentMailList({ workshopId }: { workshopId: number }) {
   const mail = useSentMail(workshopId);
   const [open, setOpen] = useState<number | null>(null);
-  if (mail.isPending) return <p className="text-sm text-zinc-500">Loading…</p>;
-  if (mail.isError) return <p className="text-sm text-red-700">{mail.error.message}</p>;
+  if (mail.isPending) return <Spinner label="Loading sent mail…" />;
+  if (mail.isError) return <LoadError what="the sent mail" error={mail.error} onRetry={() => mail.refetch()} />;
   const { items, via } = mail.data;
   return (
     <>
       <p className="mb-4 text-sm text-zinc-600">{VIA[via]}</p>
-      {items.length === 0 ? <p className="text-sm text-zinc-500">Nothing sent yet.</p> : null}
-      <ul className="divide-y divide-zinc-100 rounded-xl border border-zinc-200 bg-white shadow-xs" data-testid="sent-mail">
+      {items.length === 0 ? <EmptyState title="Nothing sent yet">Invitations and cut plan links sent by e-mail appear here.</EmptyState> : null}
+      <ul hidden={items.length === 0} className="divide-y divide-zinc-100 rounded-xl border border-zinc-200 bg-white shadow-xs" data-testid="sent-mail">
         {items.map((m) => (
           <li key={m.id} className="px-5 py-3">
             <button type="button" className="flex w-full items-start gap-3 text-left" aria-expanded={open === m.id} onClick={() => setOpen(open === m.id ? null : m.id)}>

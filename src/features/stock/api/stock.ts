@@ -46,6 +46,8 @@ export function useDeleteStockItem(workshopId: number) {
   const invalidate = useInvalidate(workshopId);
   return useMutation({
     mutationFn: (id: number) => api.delete(`/api/workshops/${workshopId}/stock/${id}`),
+    // The confirm dialog shows the error.
+    meta: { inlineErrors: true },
     onSuccess: invalidate,
   });
 }

@@ -13,7 +13,7 @@ import { HistoryList } from '../../../components/history/history-list';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/dialog';
 import { Input } from '../../../components/ui/field';
-import { isNumericColumn, SortableTableHead } from '../../../components/ui/table-head';
+import { columnClassName, isNumericColumn, SortableTableHead } from '../../../components/ui/table-head';
 import { cn } from '../../../lib/cn';
 import { formatNumber, formatRelativeTime } from '../../../lib/format';
 import { useDeleteStockItem } from '../api/stock';
@@ -49,8 +49,20 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
 
   const columns = useMemo(
     () => [
-      column.accessor('kind', { header: 'Kind', cell: (i) => KIND_LABELS[i.getValue()] }),
-      column.accessor('material', { header: 'Material', cell: (i) => <span className="font-bold text-zinc-900">{i.getValue()}</span> }),
+      // On a tablet, kind and grain move under the material so the row's buttons stay in view.
+      column.accessor('kind', { header: 'Kind', meta: { className: 'hidden lg:table-cell' }, cell: (i) => KIND_LABELS[i.getValue()] }),
+      column.accessor('material', {
+        header: 'Material',
+        cell: (i) => (
+          <>
+            <span className="font-bold text-zinc-900">{i.getValue()}</span>
+            <span className="block text-xs text-zinc-500 lg:hidden">
+              {KIND_LABELS[i.row.original.kind]}
+              {i.row.original.grain === 'length' ? ' · grain along the length' : ''}
+            </span>
+          </>
+        ),
+      }),
       column.accessor('thicknessMm', { header: 'Thickness', meta: { numeric: true }, cell: (i) => `${formatNumber(i.getValue())} mm` }),
       column.accessor((s) => s.widthMm * (s.heightMm ?? s.lengthMm ?? 0), { id: 'size', header: 'Size', cell: (i) => <span className="whitespace-nowrap tabular-nums">{stockSize(i.row.original)}</span> }),
       column.accessor((s) => s.quantity ?? Number.POSITIVE_INFINITY, {
@@ -63,12 +75,16 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
         id: 'cost',
         header: 'Cost',
         meta: { numeric: true },
-        cell: (i) => (i.row.original.cost === null ? '—' : `${i.row.original.cost.toFixed(2)}${i.row.original.kind === 'roll' ? ' /m' : ''}`),
+        cell: (i) => (
+          <span className="whitespace-nowrap">{i.row.original.cost === null ? '—' : `${i.row.original.cost.toFixed(2)}${i.row.original.kind === 'roll' ? ' /m' : ''}`}</span>
+        ),
       }),
-      column.accessor('grain', { header: 'Grain', cell: (i) => (i.getValue() === 'length' ? 'Along the length' : 'None') }),
+      column.accessor('grain', { header: 'Grain', meta: { className: 'hidden lg:table-cell' }, cell: (i) => (i.getValue() === 'length' ? 'Along the length' : 'None') }),
       column.accessor((s) => Date.parse(s.updatedAt), {
         id: 'updatedAt',
         header: 'Updated',
+        // On a tablet the row's History button tells who changed it; the column makes room for the actions.
+        meta: { className: 'hidden xl:table-cell' },
         cell: (i) => (
           <span className="block text-[13px] leading-snug whitespace-nowrap text-zinc-500">
             {formatRelativeTime(i.row.original.updatedAt)}
@@ -132,7 +148,7 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
             </button>
           ))}
         </div>
-        <div className="w-72">
+        <div className="w-full sm:w-72">
           <Input type="search" placeholder="Filter by material, thickness or note" aria-label="Filter stock" value={text} onChange={(e) => setText(e.target.value)} />
         </div>
         <p className="ml-auto text-sm text-zinc-500" aria-live="polite">
@@ -141,13 +157,16 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
       </div>
       <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
         <table className="w-full text-sm" data-testid="stock-table">
-          <SortableTableHead table={table} cellClassName="px-4 py-2.5" />
+          <SortableTableHead table={table} cellClassName="px-3 py-2.5 first:pl-4" />
           <tbody className="divide-y divide-zinc-100">
             {rows.map((row) => (
               <Fragment key={row.id}>
                 <tr className="hover:bg-zinc-50/70" data-testid="stock-row">
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className={cn('px-4 py-2.5 text-zinc-700', isNumericColumn(cell.column.columnDef.meta) && 'text-right tabular-nums')}>
+                    <td
+                      key={cell.id}
+                      className={cn('px-3 py-2.5 text-zinc-700 first:pl-4', isNumericColumn(cell.column.columnDef.meta) && 'text-right tabular-nums', columnClassName(cell.column.columnDef.meta))}
+                    >
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}
@@ -165,7 +184,11 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
             {rows.length === 0 ? (
               <tr>
                 <td colSpan={columns.length} className="px-5 py-10 text-center text-zinc-500">
-                  {items.length === 0 ? 'The stock room is empty.' : 'Nothing matches that filter.'}
+                  {items.length === 0
+                    ? canManage
+                      ? 'The stock room is empty. Add the sheets, remnants and rolls you have, or import them from a CSV file.'
+                      : 'The stock room is empty.'
+                    : 'Nothing matches that filter.'}
                 </td>
               </tr>
             ) : null}

@@ -1,10 +1,10 @@
 import { useState } from 'react';
 import { ROLES, type MemberDto, type Role } from '../../../../shared/schemas/api.schema';
-import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/dialog';
 import { Select } from '../../../components/ui/field';
 import { Spinner } from '../../../components/ui/spinner';
+import { LoadError } from '../../../components/ui/states';
 import { ROLE_DESCRIPTIONS, ROLE_LABELS } from '../../../lib/roles';
 import { useMembers } from '../api/get-members';
 import { useRemoveMember } from '../api/remove-member';
@@ -20,9 +20,7 @@ export function MembersTable({ workshopId, canManage, currentUserId }: { worksho
   if (members.isPending) return <Spinner label="Loading members…" />;
   if (members.isError)
     return (
-      <Alert tone="error" title="Could not load the members" actions={<Button onClick={() => members.refetch()}>Try again</Button>}>
-        {members.error.message}
-      </Alert>
+      <LoadError what="the members" error={members.error} onRetry={() => members.refetch()} />
     );
   const soleOwner = soleOwnerId(members.data);
 
