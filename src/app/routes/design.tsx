@@ -6,7 +6,6 @@ import { can, type UnitSystem } from '../../../shared/schemas/api.schema';
 import { ErrorBoundary } from '../../components/errors/error-boundary';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { ConflictChanges, saveUnits } from '../../features/studio/conflict';
-import { PageHeader } from '../../components/layouts/app-layout';
 import { Card } from '../../components/ui/card';
 import { HistoryList } from '../../components/history/history-list';
 import { paths } from '../../config/paths';
@@ -32,7 +31,6 @@ export function DesignRoute() {
   const { workshopId, membership } = useWorkshop();
   const designId = parseId(useParams().designId);
   const { data } = useSuspenseQuery(designQueryOptions(workshopId, designId));
-  const { outer } = data.design;
   const queryClient = useQueryClient();
   const units: UnitSystem = useMe().data?.user.units ?? 'mm';
   // Kept per user: shown at once, then saved on the account (PATCH /api/auth/me).
@@ -46,15 +44,6 @@ export function DesignRoute() {
   return (
     <>
       <title>{`${data.name} · Boxwright`}</title>
-      <PageHeader
-        back={
-          <Link to={paths.designs.getHref(workshopId)} className="text-zinc-500 hover:text-zinc-900">
-            ← All designs
-          </Link>
-        }
-        title={<span data-testid="design-title">{data.name}</span>}
-        description={`Outer size ${units === 'in' ? `${[outer.width, outer.height, outer.depth].map((v) => formatInches(v).replace(/"$/, '')).join(' × ')} in` : formatSizeMm(outer.width, outer.height, outer.depth)}`}
-      />
       <DesignEditor
         key={designId}
         workshopId={workshopId}
@@ -62,13 +51,25 @@ export function DesignRoute() {
         canEdit={can(membership.role, 'editDesigns')}
         studio={(slot) => (
           <ErrorBoundary fallback={<p className="rounded border border-zinc-200 bg-white p-4 text-sm">The drawing could not be shown; the form below still works.</p>}>
-            <Suspense fallback={<div className="flex h-[560px] items-center justify-center rounded-lg border border-zinc-200 bg-white text-sm text-zinc-500">Loading the studio…</div>}>
+            <Suspense fallback={<div className="flex h-[clamp(520px,calc(100vh-13rem),960px)] items-center justify-center rounded-lg border border-zinc-200 bg-white text-sm text-zinc-500">Loading the studio…</div>}>
               <DesignStudio {...slot} units={units} onUnitsChange={setUnits} />
             </Suspense>
           </ErrorBoundary>
         )}
         conflictDetails={(theirs, mine) => <ConflictChanges theirs={theirs} mine={mine} units={units} />}
         units={units}
+        heading={{
+          back: (
+            <Link to={paths.designs.getHref(workshopId)} className="text-zinc-500 hover:text-zinc-900">
+              ← All designs
+            </Link>
+          ),
+          title: <span data-testid="design-title">{data.name}</span>,
+          subtitle: ({ outer: o }) =>
+            units === 'in'
+              ? `${[o.width, o.height, o.depth].map((v) => formatInches(v).replace(/"$/, '')).join(' × ')} in`
+              : formatSizeMm(o.width, o.height, o.depth),
+        }}
       />
       <Card title="History" className="mt-8 max-w-3xl">
         <HistoryList workshopId={workshopId} subjectType="design" subjectId={designId} />

@@ -81,12 +81,15 @@ export function DesignEditor({
   studio,
   conflictDetails,
   units = 'mm',
+  heading,
 }: {
   workshopId: number;
   initial: DesignDto;
   canEdit: boolean;
   /** The unit lengths are shown in (kept per user); every length box accepts either. */
   units?: LengthUnit;
+  /** The page's title, shown in the sticky save bar so the studio gets the height. */
+  heading?: { title: ReactNode; back?: ReactNode; subtitle?: (design: Design) => ReactNode };
   /** The canvas studio, composed in by the route (it lives in its own feature and chunk). */
   studio?: (slot: StudioSlot) => ReactNode;
   /** What changed between their saved version and mine, shown in the conflict dialog. */
@@ -181,30 +184,41 @@ export function DesignEditor({
   return (
     <LengthUnitContext value={units}>
       <FormProvider {...form}>
-        {/* One save bar for the whole page, kept in view below the app header while the page scrolls. */}
-        <div className="sticky top-[calc(3.5rem+1px)] z-20 -mx-6 mb-5 border-b border-zinc-200 bg-zinc-50/95 px-6 py-2.5 backdrop-blur">
-          <div className="flex min-h-9 items-center justify-between gap-4" data-testid="save-status">
-            <div className="flex min-w-0 items-center gap-3 text-sm">
-              {!canEdit ? (
-                <p className="flex items-center gap-2 text-zinc-700">
-                  <span className="size-2 rounded-full bg-zinc-400" />
-                  <strong>Read only</strong>
-                  <span className="text-zinc-500">Your role lets you read this design but not change it.</span>
-                </p>
-              ) : isDirty ? (
-                <p className="flex items-center gap-2 text-amber-800">
-                  <span className="size-2 rounded-full bg-amber-500" /> Unsaved changes
-                </p>
-              ) : (
-                <p className="flex items-center gap-2 text-zinc-700">
-                  <span className="size-2 rounded-full bg-accent-500" />
-                  {savedAt ? 'All changes saved' : 'No changes'}
-                </p>
-              )}
-              <span className="truncate text-[13px] text-zinc-500" title={formatDateTime(base.updatedAt)}>
-                · Version {base.version}, saved {formatRelativeTime(base.updatedAt)}
-                {base.updatedBy ? ` by ${base.updatedBy}` : ''}
-              </span>
+        {/* The page's title and its one save bar, kept in view below the app header while the page scrolls. */}
+        <div className="sticky top-[calc(3.5rem+1px)] z-20 -mx-6 -mt-3 mb-3 border-b border-zinc-200 bg-zinc-50/95 px-6 py-2 backdrop-blur">
+          <div className="flex min-h-11 items-center justify-between gap-4" data-testid="save-status">
+            <div className="min-w-0">
+              {heading ? (
+                <div className="flex min-w-0 items-baseline gap-2">
+                  {heading.back ? <span className="shrink-0 text-[13px]">{heading.back}</span> : null}
+                  <h1 className="truncate text-[17px] leading-6 font-bold text-zinc-900">{heading.title}</h1>
+                  {heading.subtitle ? (
+                    <span className="shrink-0 text-[13px] whitespace-nowrap text-zinc-500 tabular-nums">{heading.subtitle(studioDesign)}</span>
+                  ) : null}
+                </div>
+              ) : null}
+              <div className="flex min-w-0 items-center gap-2 text-[13px]">
+                {!canEdit ? (
+                  <p className="flex shrink-0 items-center gap-1.5 text-zinc-700">
+                    <span className="size-2 rounded-full bg-zinc-400" />
+                    <strong>Read only</strong>
+                    <span className="text-zinc-500">· your role lets you read this design, not change it</span>
+                  </p>
+                ) : isDirty ? (
+                  <p className="flex shrink-0 items-center gap-1.5 font-bold text-amber-800">
+                    <span className="size-2 rounded-full bg-amber-500" /> Unsaved changes
+                  </p>
+                ) : (
+                  <p className="flex shrink-0 items-center gap-1.5 text-zinc-700">
+                    <span className="size-2 rounded-full bg-accent-500" />
+                    {savedAt ? 'All changes saved' : 'No changes'}
+                  </p>
+                )}
+                <span className="truncate text-zinc-500" title={formatDateTime(base.updatedAt)}>
+                  · Version {base.version}, saved {formatRelativeTime(base.updatedAt)}
+                  {base.updatedBy ? ` by ${base.updatedBy}` : ''}
+                </span>
+              </div>
             </div>
             {canEdit ? (
               <div className="flex shrink-0 gap-2">

@@ -88,9 +88,11 @@ export function LengthField({
   className?: string;
 }) {
   const unit = useLengthUnit();
-  const { control } = useFormContext<DesignInput>();
+  const { control, getValues } = useFormContext<DesignInput>();
   const { field, fieldState } = useController({ control, name });
-  const value = typeof field.value === 'number' ? field.value : undefined;
+  // The form's own value: the controller's falls back to the default when the value is undefined (an emptied box).
+  const stored: unknown = getValues(name);
+  const value = typeof stored === 'number' ? stored : undefined;
   const shown = value === undefined || Number.isNaN(value) ? '' : formatLengthInput(value, unit);
   /** What the person is typing; null while the box shows the form's value. */
   const [draft, setDraft] = useState<string | null>(null);

@@ -4,17 +4,17 @@
  * the page passes it in and hears about every committed change through onChange.
  */
 import { useEffect, useMemo, useRef, useState } from 'react';
-import type { Warning } from '../../../../shared/schemas/plan.types';
 import { BRACE_KINDS, OPENING_KINDS } from '../model/commands';
 import { StudioEditor } from '../model/editor';
 import { diffDesigns } from '../model/diff';
 import { EMPTY_FIGURES, nextFigures, type FiguresState, type PlanOutcome } from '../model/figures';
+import { describeField, plainMessage } from '../model/items';
 import { planDesign } from '../model/plan';
 import { GRIDS, type GridId } from '../model/snapping';
 import type { StudioDoc, UnitSystem } from '../model/types';
 import { hitForField, type HitId } from '../model/views';
-import { FiguresPanel } from './figures-panel';
-import { Inspector } from './inspector';
+import { FiguresPanel, FiguresStrip } from './figures-panel';
+import { Inspector, type ItemNote } from './inspector';
 import { LiningView } from './lining-view';
 import { StudioCanvas } from './studio-canvas';
 import { useEditorState } from './use-editor';
@@ -129,21 +129,30 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
   const lastPlan = useRef(outcome.ok ? outcome.plan : null);
   if (outcome.ok) lastPlan.current = outcome.plan;
 
-  const warnings = useMemo(() => {
-    const m = new Map<HitId, string[]>();
-    const add = (field: string | undefined, msg: string) => {
+  // Messages about items, drawn where the items are: the engine's errors while the design cannot be
+  // planned, its warnings otherwise.
+  const notes = useMemo(() => {
+    const m = new Map<HitId, ItemNote[]>();
+    const add = (field: string | undefined, note: ItemNote) => {
       const hit = hitForField(field);
-      if (hit) m.set(hit, [...(m.get(hit) ?? []), msg]);
+      if (hit) m.set(hit, [...(m.get(hit) ?? []), note]);
     };
-    if (figures.error) for (const [f, msg] of Object.entries(figures.error.fields)) add(f, msg);
-    else for (const w of figures.figures?.warnings ?? []) add(w.field, w.message);
+    if (figures.error) for (const [f, msg] of Object.entries(figures.error.fields)) add(f, { tone: 'error', text: plainMessage(state.doc, msg) });
+    else for (const w of figures.figures?.warnings ?? []) add(w.field, { tone: 'warn', text: plainMessage(state.doc, w.message) });
     return m;
-  }, [figures]);
+  }, [figures, state.doc]);
+  const warnings = useMemo(() => new Map([...notes].map(([hit, list]) => [hit, list.map((n) => n.text)])), [notes]);
 
   // Keys: when the studio has the focus (or nothing does), never while typing in a field or a dialog.
   const rootRef = useRef<HTMLDivElement>(null);
   useEffect(() => {
     const down = (e: KeyboardEvent) => {
+      const undoKey = (e.ctrlKey || e.metaKey) && ['z', 'y'].includes(e.key.toLowerCase());
+      if (undoKey && e.target instanceof HTMLElement && e.target.dataset.pristine && rootRef.current?.contains(e.target)) {
+        // In an inspector box with nothing typed since its value was shown (after Enter), undo is the studio's.
+        if (editor.keyDown(e)) e.preventDefault();
+        return;
+      }
       if (isTyping(e.target) || tab !== 'drawing') return;
       const inStudio = e.target === document.body || (e.target instanceof Node && !!rootRef.current?.contains(e.target));
       if (!inStudio) return;
@@ -159,9 +168,15 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
   }, [editor, tab]);
 
   const sel = state.selection;
+  // A new selection shows its values at the top of the side panel.
+  const asideRef = useRef<HTMLElement>(null);
+  const selKey = sel === null ? 'none' : sel.kind === 'box' ? 'box' : `${sel.kind}:${sel.index}`;
+  useEffect(() => {
+    asideRef.current?.scrollTo({ top: 0 });
+  }, [selKey]);
   const selHit = sel && sel.kind !== 'box' ? (`${sel.kind}:${sel.index}` as HitId) : null;
-  const showWarning = (w: Warning) => {
-    const hit = hitForField(w.field);
+  const showField = (field: string | undefined) => {
+    const hit = hitForField(field);
     if (!hit) return;
     const [kind, index] = hit.split(':') as ['brace' | 'opening', string];
     setTab('drawing');
@@ -172,7 +187,7 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
   return (
     <div
       ref={rootRef}
-      className={`flex flex-col overflow-hidden rounded-lg border border-zinc-200 bg-white ${className ?? 'h-[clamp(500px,calc(100vh-10rem),760px)]'}`}
+      className={`flex flex-col overflow-hidden rounded-lg border border-zinc-200 bg-white ${className ?? 'h-[clamp(520px,calc(100vh-13rem),960px)]'}`}
       data-testid="design-studio"
       data-readonly={readOnly || undefined}
     >
@@ -248,7 +263,7 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
               </span>
             </>
           )}
-          <Divider />
+          {tab === 'drawing' && <Divider />}
           <Segmented<UnitSystem>
             role="radiogroup"
             label="Units"
@@ -263,38 +278,53 @@ export function DesignStudio({ design, readOnly, units, onChange, onUnitsChange,
         </div>
       </div>
       <div className="flex min-h-0 flex-1">
-        <div className="relative min-w-0 flex-1">
-          {tab === 'drawing' ? (
-            <>
-              <StudioCanvas editor={editor} state={state} warnings={warnings} fitRequest={fitRequest} />
-              <p className="pointer-events-none absolute bottom-2 left-3 text-[11.5px] text-zinc-400">
-                {readOnly
-                  ? 'Wheel to zoom · drag the background to pan'
-                  : 'Drag to move · arrows nudge (Shift ×10) · wheel zooms · drag the background or hold Space to pan · Ctrl+Z undo'}
-              </p>
-            </>
-          ) : (
-            <div className="h-full overflow-auto bg-zinc-50/60">
-              <LiningView pieces={lastPlan.current?.liningPieces ?? []} units={units} stale={figures.stale} />
-            </div>
-          )}
+        <div className="flex min-w-0 flex-1 flex-col">
+          <div className="relative min-h-0 flex-1">
+            {tab === 'drawing' ? (
+              <>
+                <StudioCanvas editor={editor} state={state} warnings={warnings} fitRequest={fitRequest} />
+                <p className="pointer-events-none absolute top-2 left-3 text-[11.5px] text-zinc-500">
+                  {readOnly
+                    ? 'Wheel zooms · drag the background to pan'
+                    : 'Drag to move or resize · arrows nudge (Shift ×10) · wheel zooms · drag the background or hold Space to pan'}
+                </p>
+              </>
+            ) : (
+              <div className="h-full overflow-auto bg-zinc-50/60">
+                <LiningView pieces={lastPlan.current?.liningPieces ?? []} units={units} stale={figures.stale} />
+              </div>
+            )}
+          </div>
+          <FiguresStrip
+            state={figures}
+            describeField={(field) => describeField(state.doc, field)}
+            plainMessage={(text) => plainMessage(state.doc, text)}
+            onShowField={showField}
+            onShowWarnings={() => {
+              const aside = asideRef.current;
+              const list = aside?.querySelector('#studio-warnings');
+              if (aside && list instanceof HTMLElement) aside.scrollTo({ top: list.offsetTop - aside.offsetTop - 8, behavior: 'smooth' });
+            }}
+          />
         </div>
-        <aside className="w-[19.5rem] shrink-0 space-y-5 overflow-y-auto border-l border-zinc-200 bg-white px-4 py-3">
+        <aside ref={asideRef} className="relative w-[19.5rem] shrink-0 space-y-5 overflow-y-auto border-l border-zinc-200 bg-white px-4 py-3" aria-label="Selection and figures">
           <Inspector
             editor={editor}
             doc={state.doc}
             selection={sel}
             units={units}
             readOnly={readOnly}
-            messages={selHit ? warnings.get(selHit) ?? [] : []}
+            messages={selHit ? notes.get(selHit) ?? [] : []}
           />
           <div className="border-t border-zinc-200 pt-3">
             <FiguresPanel
               state={figures}
               units={units}
               readOnly={readOnly}
+              describeField={(field) => describeField(state.doc, field)}
+              plainMessage={(text) => plainMessage(state.doc, text)}
               onApplyPortLength={(mm) => editor.applyPortLength(figures.figures?.port?.portIndexes ?? [], mm)}
-              onShowWarning={showWarning}
+              onShowField={showField}
             />
           </div>
         </aside>

@@ -2,7 +2,6 @@
  * Live figures from the cabinet engine. When the design cannot be planned, the field message shows and
  * the last good figures stay, greyed.
  */
-import type { Warning } from '../../../../shared/schemas/plan.types';
 import type { FiguresState } from '../model/figures';
 import type { UnitSystem } from '../model/types';
 import { formatLength } from '../model/units';
@@ -11,8 +10,13 @@ export interface FiguresPanelProps {
   state: FiguresState;
   units: UnitSystem;
   readOnly: boolean;
+  /** A field path in words ("Shelf brace 1, position"). */
+  describeField(field: string): string;
+  /** An engine message with item paths named as the studio names the items. */
+  plainMessage(text: string): string;
   onApplyPortLength(lengthMm: number): void;
-  onShowWarning(w: Warning): void;
+  /** Selects the item a field path points at. */
+  onShowField(field: string | undefined): void;
 }
 
 const n1 = (v: number) => v.toLocaleString('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
@@ -61,23 +65,25 @@ function Group({ title, children }: { title: string; children: React.ReactNode }
   );
 }
 
-export function FiguresPanel({ state, units, readOnly, onApplyPortLength, onShowWarning }: FiguresPanelProps) {
+export function FiguresPanel({ state, units, readOnly, describeField, plainMessage, onApplyPortLength, onShowField }: FiguresPanelProps) {
   const f = state.figures;
   return (
     <div className="space-y-3" data-testid="studio-figures" aria-live="polite">
       {state.error && (
         <div role="alert" className="rounded border border-red-200 bg-red-50 px-2.5 py-2 text-[12.5px] leading-snug text-red-800">
           <p className="font-bold">This design cannot be planned yet</p>
-          <ul className="mt-1 space-y-0.5">
+          <ul className="mt-1 space-y-1">
             {Object.entries(state.error.fields).length > 0
               ? Object.entries(state.error.fields).map(([field, msg]) => (
                   <li key={field}>
-                    <span className="font-mono text-[11.5px]">{field}</span>: {msg}
+                    <button type="button" className="text-left hover:underline" onClick={() => onShowField(field)} title={field}>
+                      <span className="font-bold">{describeField(field)}:</span> {plainMessage(msg)}
+                    </button>
                   </li>
                 ))
-              : [<li key="m">{state.error.message}</li>]}
+              : [<li key="m">{plainMessage(state.error.message)}</li>]}
           </ul>
-          {f && <p className="mt-1 text-[11.5px] text-red-700/80">Figures below are from the last design that could be planned.</p>}
+          {f && <p className="mt-1.5 text-[11.5px] text-red-700/80">The figures below are from the last design that could be planned.</p>}
         </div>
       )}
       {!f && !state.error && <p className="text-[13px] text-zinc-500">Working out the figures…</p>}
@@ -147,7 +153,7 @@ export function FiguresPanel({ state, units, readOnly, onApplyPortLength, onShow
           <Group title="Panels">
             <Row label="Panels to cut" value={String(f.panelCount)} testId="fig-panels" />
           </Group>
-          <div className="border-t border-zinc-200 pt-2">
+          <div className="border-t border-zinc-200 pt-2" id="studio-warnings">
             <h3 className="mb-1 text-[11px] font-bold uppercase tracking-wider text-zinc-500">
               Warnings <span className="font-normal normal-case tracking-normal text-zinc-400">({f.warnings.length})</span>
             </h3>
@@ -160,10 +166,10 @@ export function FiguresPanel({ state, units, readOnly, onApplyPortLength, onShow
                     <button
                       type="button"
                       className="w-full rounded px-1.5 py-1 text-left text-[12.5px] leading-snug text-orange-900 hover:bg-orange-50"
-                      onClick={() => onShowWarning(w)}
+                      onClick={() => onShowField(w.field)}
                     >
                       <span aria-hidden className="mr-1.5 inline-block h-2 w-2 rounded-full bg-orange-600 align-middle" />
-                      {w.message}
+                      {plainMessage(w.message)}
                     </button>
                   </li>
                 ))}
@@ -171,6 +177,81 @@ export function FiguresPanel({ state, units, readOnly, onApplyPortLength, onShow
             )}
           </div>
         </div>
+      )}
+    </div>
+  );
+}
+
+/**
+ * The key figures in one line under the drawing, always in view while dragging; the side panel has them all.
+ * While the design cannot be planned it says why instead.
+ */
+export function FiguresStrip({
+  state,
+  describeField,
+  plainMessage,
+  onShowField,
+  onShowWarnings,
+}: {
+  state: FiguresState;
+  describeField(field: string): string;
+  plainMessage(text: string): string;
+  onShowField(field: string | undefined): void;
+  onShowWarnings(): void;
+}) {
+  const f = state.figures;
+  const Item = ({ label, value, unit, testId, raw }: { label: string; value: string; unit?: string; testId?: string; raw?: number }) => (
+    <span className="whitespace-nowrap">
+      <span className="text-zinc-500">{label}</span>{' '}
+      <span className="font-mono text-zinc-900 tabular-nums" data-testid={testId} data-value={raw}>
+        {value}
+      </span>
+      {unit && <span className="ml-0.5 text-[11px] text-zinc-500">{unit}</span>}
+    </span>
+  );
+  const firstError = state.error ? Object.entries(state.error.fields)[0] : undefined;
+  return (
+    <div
+      className="flex min-h-9 shrink-0 flex-wrap items-center gap-x-5 gap-y-0.5 border-t border-zinc-200 bg-white px-3 py-1.5 text-[12.5px]"
+      data-testid="figures-strip"
+      aria-label="Key figures"
+    >
+      {state.error ? (
+        <button type="button" className="min-w-0 truncate text-left text-red-800 hover:underline" onClick={() => onShowField(firstError?.[0])}>
+          <span className="mr-1.5 inline-block size-2 rounded-full bg-red-600 align-middle" aria-hidden />
+          <strong>Cannot be planned:</strong> {firstError ? `${describeField(firstError[0])}: ${plainMessage(firstError[1])}` : plainMessage(state.error.message)}
+        </button>
+      ) : f ? (
+        <>
+          <Item label="Net" value={n2(f.netLitres)} unit="L" testId="strip-net" raw={f.netLitres} />
+          <Item label="Gross" value={n2(f.grossLitres)} unit="L" />
+          {f.port ? (
+            <Item
+              label="Tuning"
+              value={n1(f.port.tuningHz)}
+              unit={f.port.targetHz !== null ? `Hz (target ${n1(f.port.targetHz)})` : 'Hz'}
+              testId="strip-tuning"
+              raw={f.port.tuningHz}
+            />
+          ) : (
+            <span className="text-zinc-500">Closed box</span>
+          )}
+          {f.port?.peakAirSpeedMs != null && <Item label="Port air" value={n1(f.port.peakAirSpeedMs)} unit="m/s" />}
+          {f.lining && <Item label="Lining" value={n2(f.lining.areaM2)} unit="m²" />}
+          <Item label="Panels" value={String(f.panelCount)} />
+          <span className="ml-auto">
+            {f.warnings.length === 0 ? (
+              <span className="text-zinc-500">No warnings</span>
+            ) : (
+              <button type="button" className="rounded px-1.5 py-0.5 font-bold text-orange-900 hover:bg-orange-50" onClick={onShowWarnings}>
+                <span className="mr-1.5 inline-block size-2 rounded-full bg-orange-600 align-middle" aria-hidden />
+                {f.warnings.length === 1 ? '1 warning' : `${f.warnings.length} warnings`}
+              </button>
+            )}
+          </span>
+        </>
+      ) : (
+        <span className="text-zinc-500">Working out the figures…</span>
       )}
     </div>
   );

@@ -22,7 +22,7 @@ import { formatLength } from '../model/units';
 import { LengthInput, NumberField } from './length-input';
 
 const FACE_LABEL: Record<Face, string> = { front: 'Front (baffle)', back: 'Back', left: 'Left side', right: 'Right side', top: 'Top', bottom: 'Bottom' };
-const AXIS_WORD: Record<Axis, string> = { x: 'x, from left', y: 'y, from bottom', z: 'z, from front' };
+const AXIS_WORD: Record<Axis, string> = { x: 'x from left', y: 'y from bottom', z: 'z from front' };
 
 export interface InspectorProps {
   editor: StudioEditor;
@@ -30,17 +30,24 @@ export interface InspectorProps {
   selection: Selection;
   units: UnitSystem;
   readOnly: boolean;
-  /** Warning and error messages about the selected item. */
-  messages: string[];
+  /** The engine's messages about the selected item. */
+  messages: ItemNote[];
 }
 
-function Section({ title, children, action, testId }: { title: string; children: ReactNode; action?: ReactNode; testId?: string }) {
+/** A message about one item: an error (the design cannot be planned) or a warning. */
+export interface ItemNote {
+  tone: 'error' | 'warn';
+  text: string;
+}
+
+function Section({ title, children, action, testId, notes }: { title: string; children: ReactNode; action?: ReactNode; testId?: string; notes?: ReactNode }) {
   return (
     <section className="space-y-2" data-testid={testId}>
       <div className="flex min-h-6 items-center justify-between">
         <h3 className="text-[11px] font-bold uppercase tracking-wider text-zinc-500">{title}</h3>
         {action}
       </div>
+      {notes}
       {children}
     </section>
   );
@@ -95,9 +102,24 @@ function SelectRow<T extends string>({
 }
 
 /** A checkbox that adds or removes an optional part (a rebate, screw holes, the lining). */
-function Toggle({ label, checked, onChange, readOnly, testId }: { label: string; checked: boolean; onChange(on: boolean): void; readOnly: boolean; testId?: string }) {
+function Toggle({
+  label,
+  checked,
+  onChange,
+  readOnly,
+  testId,
+  quiet,
+}: {
+  label: string;
+  checked: boolean;
+  onChange(on: boolean): void;
+  readOnly: boolean;
+  testId?: string;
+  /** Normal weight (beside a section title) instead of a group's bold title. */
+  quiet?: boolean;
+}) {
   return (
-    <label className="flex cursor-pointer items-center gap-2 text-[12.5px] font-bold text-zinc-700 has-disabled:cursor-default">
+    <label className={`flex cursor-pointer items-center gap-2 text-[12.5px] text-zinc-700 has-disabled:cursor-default ${quiet ? '' : 'font-bold'}`}>
       <input
         type="checkbox"
         className="size-3.5 accent-accent-600"
@@ -153,9 +175,17 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
     </button>
   );
   const notes = messages.length > 0 && (
-    <ul className="space-y-1 rounded border border-amber-200 bg-amber-50 p-2 text-[12px] leading-snug text-amber-900" data-testid="inspector-notes">
+    <ul className="space-y-1" data-testid="inspector-notes">
       {messages.map((m) => (
-        <li key={m}>{m}</li>
+        <li
+          key={m.text}
+          role={m.tone === 'error' ? 'alert' : undefined}
+          className={`rounded border px-2 py-1.5 text-[12px] leading-snug ${
+            m.tone === 'error' ? 'border-red-200 bg-red-50 text-red-800' : 'border-amber-200 bg-amber-50 text-amber-900'
+          }`}
+        >
+          {m.text}
+        </li>
       ))}
     </ul>
   );
@@ -168,7 +198,7 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
     if (b.type === 'shelf') {
       const [u, v] = otherAxes(b.axis);
       return (
-        <Section title={title ?? 'Shelf brace'} action={del} testId="inspector">
+        <Section title={title ?? 'Shelf brace'} action={del} testId="inspector" notes={notes}>
           <SelectRow
             label="Lies across"
             value={b.axis}
@@ -242,13 +272,12 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
               );
             })}
           </Group>
-          {notes}
         </Section>
       );
     }
     const [a0, a1] = otherAxes(b.axis);
     return (
-      <Section title={title ?? 'Bar brace'} action={del} testId="inspector">
+      <Section title={title ?? 'Bar brace'} action={del} testId="inspector" notes={notes}>
         <SelectRow
           label="Runs along"
           value={b.axis}
@@ -264,7 +293,6 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
         {L(`Centre ${a1}`, ['braces', i, 'at', 1], b.at[1], { allowZero: true })}
         {L(`Section along ${a0}`, ['braces', i, 'section', 0], b.section[0])}
         {L(`Section along ${a1}`, ['braces', i, 'section', 1], b.section[1])}
-        {notes}
       </Section>
     );
   }
@@ -275,7 +303,7 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
     const i = selection.index;
     const at = ['openings', i];
     return (
-      <Section title={title ?? 'Opening'} action={del} testId="inspector">
+      <Section title={title ?? 'Opening'} action={del} testId="inspector" notes={notes}>
         <SelectRow<Face>
           label="Face"
           value={o.face}
@@ -284,7 +312,7 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
           options={FACES.map((f) => ({ value: f, label: FACE_LABEL[f] }))}
           onChange={(face) => editor.setOpeningFace(i, face)}
         />
-        {FACE_COORDS[o.face].map((axis: Axis) => L(`Centre ${AXIS_WORD[axis]}`, [...at, axis], o[axis], { allowZero: true }))}
+        {FACE_COORDS[o.face].map((axis: Axis) => L(AXIS_WORD[axis], [...at, axis], o[axis], { allowZero: true }))}
         {o.type === 'driver' && (
           <>
             {L('Cut-out diameter', [...at, 'diameter'], o.diameter)}
@@ -320,9 +348,9 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
             >
               {o.screwHoles && (
                 <>
-                  {N('Screw count', [...at, 'screwHoles', 'count'], o.screwHoles.count, undefined, { allowEmpty: false, integer: { min: 1, max: 24 } })}
+                  {N('Count', [...at, 'screwHoles', 'count'], o.screwHoles.count, undefined, { allowEmpty: false, integer: { min: 1, max: 24 } })}
                   {L('On a circle of', [...at, 'screwHoles', 'circleDiameter'], o.screwHoles.circleDiameter)}
-                  {L('Screw hole diameter', [...at, 'screwHoles', 'holeDiameter'], o.screwHoles.holeDiameter)}
+                  {L('Hole diameter', [...at, 'screwHoles', 'holeDiameter'], o.screwHoles.holeDiameter)}
                 </>
               )}
             </Group>
@@ -384,7 +412,6 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
           </>
         )}
         {o.type === 'lead' && L('Diameter', [...at, 'diameter'], o.diameter)}
-        {notes}
       </Section>
     );
   }
@@ -393,19 +420,19 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
   const lining = doc.lining ?? null;
   return (
     <div className="space-y-5">
-      <Section title="Box" testId="inspector">
+      <Section title="Box" testId="inspector" notes={notes}>
         {L('Outer width', ['outer', 'width'], doc.outer.width)}
         {L('Outer height', ['outer', 'height'], doc.outer.height)}
         {L('Outer depth', ['outer', 'depth'], doc.outer.depth)}
         {L('Panel thickness', ['material', 'thickness'], doc.material.thickness)}
         {L('Baffle thickness', ['baffleThickness'], doc.baffleThickness, { allowEmpty: true })}
-        {notes}
       </Section>
       <Section
         title="Lining"
         action={
           <Toggle
             label="Line this box"
+            quiet
             checked={lining !== null}
             readOnly={readOnly}
             testId="toggle-lining"

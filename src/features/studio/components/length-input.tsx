@@ -44,9 +44,13 @@ function CommitInput({ label, shown, readOnly, parse, onCommit, suffix, testId }
           <input
             id={id}
             data-testid={testId}
-            className={`h-7 w-full rounded border bg-white pl-2 text-right font-mono text-[12.5px] tabular-nums text-zinc-800 read-only:bg-zinc-50 read-only:text-zinc-500 ${
-              suffix ? 'pr-9' : 'pr-2'
-            } ${error ? 'border-red-500' : 'border-zinc-300 focus:border-accent-500'}`}
+            // Nothing typed since the value was shown: Ctrl+Z here undoes in the studio, not in the box.
+            data-pristine={text === shown || undefined}
+            className={`h-7 w-full rounded border bg-white pr-2 pl-2 text-right font-mono text-[12.5px] tabular-nums text-zinc-800 read-only:bg-zinc-50 read-only:text-zinc-500 ${
+              error ? 'border-red-500' : 'border-zinc-300 focus:border-accent-500'
+            }`}
+            // Room for the unit after the number, however long it is (L, Hz, kg/m³).
+            style={suffix ? { paddingRight: `${16 + suffix.length * 6.5}px` } : undefined}
             value={text}
             readOnly={readOnly}
             inputMode={suffix ? 'decimal' : undefined}

@@ -70,6 +70,8 @@ function Dim({ from, to, at, orientation, base, text, color }: DimProps) {
   if (b - a < 2) return null;
   const tick = 4;
   const textWidth = 90;
+  /** About the drawn width of the value at 11 px (DejaVu Sans averages ~0.6 em a character); its background hides lines behind it. */
+  const labelWidth = Math.min(textWidth, text.length * 6.6 + 6);
   if (orientation === 'h') {
     const y = crisp(at);
     const dir = at > base ? 1 : -1;
@@ -80,7 +82,7 @@ function Dim({ from, to, at, orientation, base, text, color }: DimProps) {
         <Line points={[a, y, b, y]} stroke={color} strokeWidth={1} />
         <Line points={[a - tick, y + tick, a + tick, y - tick]} stroke={color} strokeWidth={1} />
         <Line points={[b - tick, y + tick, b + tick, y - tick]} stroke={color} strokeWidth={1} />
-        <Rect x={(a + b) / 2 - textWidth / 2} y={y - 7} width={textWidth} height={14} fill={CANVAS_BG} opacity={0} />
+        <Rect x={(a + b) / 2 - labelWidth / 2} y={dir > 0 ? y + 2 : y - 16} width={labelWidth} height={14} fill={CANVAS_BG} />
         <Text
           x={(a + b) / 2 - textWidth / 2}
           y={dir > 0 ? y + 3 : y - 15}
@@ -103,6 +105,7 @@ function Dim({ from, to, at, orientation, base, text, color }: DimProps) {
       <Line points={[x, a, x, b]} stroke={color} strokeWidth={1} />
       <Line points={[x - tick, a + tick, x + tick, a - tick]} stroke={color} strokeWidth={1} />
       <Line points={[x - tick, b + tick, x + tick, b - tick]} stroke={color} strokeWidth={1} />
+      <Rect x={dir > 0 ? x + 2 : x - 16} y={(a + b) / 2 - labelWidth / 2} width={14} height={labelWidth} fill={CANVAS_BG} />
       <Text
         x={dir > 0 ? x + 3 : x - 15}
         y={(a + b) / 2 + textWidth / 2}
@@ -281,10 +284,7 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
     const vRight = view !== 'front';
     const hAt = (tier: number) => (hBelow ? p0.y + DIM_GAP + tier * DIM_TIER : p1.y - DIM_GAP - tier * DIM_TIER);
     const vAt = (tier: number) => (vRight ? p1.x + DIM_GAP + tier * DIM_TIER : p0.x - DIM_GAP - tier * DIM_TIER);
-    const out = [
-      <Dim key="h" from={p0.x} to={p1.x} at={hAt(0)} base={hBelow ? p0.y : p1.y} orientation="h" text={fmt(outerSizeMm(doc, ha))} color={INK} />,
-      <Dim key="v" from={p0.y} to={p1.y} at={vAt(0)} base={vRight ? p1.x : p0.x} orientation="v" text={fmt(outerSizeMm(doc, va))} color={INK} />,
-    ];
+    const out: ReactElement[] = [];
     // The selection's distance from the box's origin edges, on the axes this view shows.
     const sel = state.selection;
     if (sel && sel.kind !== 'box') {
@@ -300,6 +300,11 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
         out.push(<Dim key="sv" from={p0.y} to={y} at={vAt(1)} base={vRight ? p1.x : p0.x} orientation="v" text={fmt(cv)} color={ACCENT} />);
       }
     }
+    // The outer sizes last: their labels sit over the selection's extension lines, as a drawing breaks a line at a value.
+    out.push(
+      <Dim key="h" from={p0.x} to={p1.x} at={hAt(0)} base={hBelow ? p0.y : p1.y} orientation="h" text={fmt(outerSizeMm(doc, ha))} color={INK} />,
+      <Dim key="v" from={p0.y} to={p1.y} at={vAt(0)} base={vRight ? p1.x : p0.x} orientation="v" text={fmt(outerSizeMm(doc, va))} color={INK} />,
+    );
     return out;
   };
 

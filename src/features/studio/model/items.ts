@@ -106,3 +106,53 @@ export function withLinedFace(lining: Lining, face: Face, lined: boolean): Linin
   if (has === lined) return lining;
   return { ...lining, faces: lined ? [...lining.faces, face] : lining.faces.filter((f) => f !== face) };
 }
+
+const FIELD_WORDS: Record<string, string> = {
+  targetHz: 'target tuning',
+  displacementLitres: 'displacement',
+  screwHoles: 'screw holes',
+  circleDiameter: 'circle diameter',
+  holeDiameter: 'hole diameter',
+  coneAreaCm2: 'cone area',
+  excursionMm: 'excursion',
+  minSliver: 'smallest strip',
+  portClearance: 'port clearance',
+  baffleThickness: 'baffle thickness',
+  airTemperatureC: 'air temperature',
+  at: 'position',
+  u: 'centre u',
+  v: 'centre v',
+};
+
+function words(parts: string[]): string {
+  return parts
+    .map((p) => (/^\d+$/.test(p) ? String(Number(p) + 1) : FIELD_WORDS[p] ?? p.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase()))
+    .join(' ')
+    .replace(/\b(window|brace|opening)s (\d+)/g, '$1 $2');
+}
+
+/**
+ * A field path from the engine or the API, in words: `braces[0].position` → "Shelf brace 1, position",
+ * `openings[2].length` → "Round port 1, length", `outer.width` → "Outer width".
+ */
+export function describeField(doc: StudioDoc, field: string): string {
+  const parts = field.split(/[.[\]]+/).filter(Boolean);
+  const [head, index, ...rest] = parts;
+  if ((head === 'braces' || head === 'openings') && index !== undefined && /^\d+$/.test(index)) {
+    const label = itemLabel(doc, { kind: head === 'braces' ? 'brace' : 'opening', index: Number(index) }) ?? `${head === 'braces' ? 'Brace' : 'Opening'} ${Number(index) + 1}`;
+    return rest.length > 0 ? `${label}, ${words(rest)}` : label;
+  }
+  const text = words(parts);
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/**
+ * An engine message as the studio shows it: item paths in it named as the studio names the items
+ * ("The port tube at openings[2] crosses …" → "The port tube at Round port 1 crosses …"), first letter capital.
+ */
+export function plainMessage(doc: StudioDoc, message: string): string {
+  const text = message.replace(/\b(braces|openings)\[(\d+)\](?![.[])/g, (whole, head: string, index: string) => {
+    return itemLabel(doc, { kind: head === 'braces' ? 'brace' : 'opening', index: Number(index) }) ?? whole;
+  });
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
