@@ -95,6 +95,38 @@ const tests: E2ETest[] = [
     },
   },
   {
+    name: 'the checklist names the sheets as the cut plan page does; on a tablet the sheets and cautions come before the pieces',
+    timeoutMs: 90_000,
+    async run(ctx) {
+      const maker = await ctx.api(DEMO.maker);
+      const { workshopId, planId } = await makePlan(maker);
+      const page = await ctx.page();
+      await ctx.signIn(page, DEMO.maker);
+
+      // The cut plan page: "Sheet 2 · MDF 18 mm · 2440 × 1220 mm" → "Sheet 2" (the name printed on the cut diagrams).
+      await page.goto(`${ctx.baseUrl}/w/${workshopId}/cut-plans/${planId}`);
+      await page.getByTestId('sheet-card').first().waitFor();
+      const onPlan = (await page.getByTestId('sheet-card').locator('h3').allTextContents()).map((t) => t.split(' · ')[0]!.trim());
+      expect(onPlan.length >= 3, `the plan has several sheets and a roll: ${onPlan.join(', ')}`);
+      expect(new Set(onPlan).size === onPlan.length, `every sheet has its own name: ${onPlan.join(', ')}`);
+
+      await page.getByRole('link', { name: 'Checklist', exact: true }).click();
+      await page.getByRole('heading', { name: `Checklist: ${BUILD}` }).waitFor();
+      const onChecklist = (await page.getByTestId('sheet').locator('span.font-bold').allTextContents()).map((t) => t.trim());
+      expect(JSON.stringify(onChecklist) === JSON.stringify(onPlan), `checklist sheets ${onChecklist.join(', ')} vs cut plan ${onPlan.join(', ')}`);
+      // The same cautions as the cut plan page and the printed diagrams.
+      const cautions = await page.getByTestId('cautions').innerText();
+      expect(/dust/i.test(cautions) && /local/i.test(cautions) && /tool maker/i.test(cautions) && /lifting/i.test(cautions), `cautions: ${cautions}`);
+
+      await page.setViewportSize({ width: 820, height: 1180 });
+      const sheetsTop = (await page.getByRole('heading', { name: 'Sheets', exact: true }).boundingBox())!.y;
+      const cautionsTop = (await page.getByTestId('cautions').boundingBox())!.y;
+      const piecesTop = (await page.getByRole('heading', { name: 'Pieces', exact: true }).boundingBox())!.y;
+      expect(sheetsTop < piecesTop && cautionsTop < piecesTop, `on a tablet: sheets at ${sheetsTop}, cautions at ${cautionsTop}, pieces at ${piecesTop}`);
+      await ctx.screenshot('checklist-tablet-sheets-first');
+    },
+  },
+  {
     name: 'a viewer sees the progress but cannot tick',
     timeoutMs: 90_000,
     async run(ctx) {
@@ -174,7 +206,7 @@ const tests: E2ETest[] = [
       await ctx.screenshot('invite-accept', newcomer);
       await newcomer.getByRole('button', { name: 'Make my account and join' }).click();
       await newcomer.waitForURL(/\/w\/\d+\/designs$/);
-      await newcomer.getByText('· Viewer').waitFor();
+      await newcomer.getByTestId('role-label').filter({ hasText: 'Viewer' }).waitFor();
       expect((await newcomer.getByRole('link', { name: 'Stock room' }).count()) === 0, 'a viewer has no stock room');
       // The link worked once.
       await newcomer.goto(href.replace(/^https?:\/\/[^/]+/, ctx.baseUrl));

@@ -124,6 +124,42 @@ const tests: E2ETest[] = [
       await page.getByText('Harbour bookshelf (two-way, rear port) × 2 (mirrored pair)').waitFor();
     },
   },
+  {
+    name: 'a shared link shows the plan as members see it: the same sheet names and drawings, the cautions and the files',
+    timeoutMs: 90_000,
+    async run(ctx) {
+      const maker = await ctx.api(DEMO.maker);
+      const me = await (await maker.get('/api/auth/me')).json();
+      const workshopId = me.memberships[0].workshopId as number;
+      const plans = (await (await maker.get(`/api/workshops/${workshopId}/cut-plans`)).json()).items as Array<{ id: number }>;
+      expect(plans.length > 0, 'an earlier test made a cut plan');
+      const planId = plans[0]!.id;
+      const link = await (await maker.post(`/api/workshops/${workshopId}/cut-plans/${planId}/share-links`, { data: { days: 1 } })).json();
+
+      const page = await ctx.page();
+      await ctx.signIn(page, DEMO.maker);
+      await page.goto(`${ctx.baseUrl}/w/${workshopId}/cut-plans/${planId}`);
+      await page.getByTestId('sheet-card').first().waitFor();
+      const members = await page.getByTestId('sheet-card').locator('h3').allTextContents();
+
+      // Someone without an account.
+      const other = await ctx.newSession();
+      const shared = await other.page();
+      await shared.goto(link.url.replace(/^https?:\/\/[^/]+/, ctx.baseUrl));
+      await shared.getByTestId('sheet-card').first().waitFor();
+      const outside = await shared.getByTestId('sheet-card').locator('h3').allTextContents();
+      expect(JSON.stringify(outside) === JSON.stringify(members), `shared ${outside.join(' | ')} vs members ${members.join(' | ')}`);
+      await shared.getByTestId('cautions').waitFor();
+      expect((await shared.getByRole('link', { name: 'Cut diagrams (PDF)' }).count()) === 1, 'the cut diagrams can be downloaded');
+      expect((await shared.getByRole('button', { name: 'Sign out' }).count()) === 0, 'no workshop frame for a visitor');
+      expect(!(await shared.locator('body').innerText()).includes(DEMO.maker), 'the shared page names no one');
+      await ctx.screenshot('shared-plan', shared);
+
+      // A link that does not exist says what to do next.
+      await shared.goto(`${ctx.baseUrl}/share/not-a-real-token`);
+      await shared.getByText('ask the person who sent it for a new one').waitFor();
+    },
+  },
 ];
 
 export default tests;
