@@ -8,7 +8,9 @@ import { designSchema, type PortOpening, type TerminalOpening } from '../../../s
 import {
   defaultRebate,
   defaultScrewHoles,
+  describeField,
   listItems,
+  plainMessage,
   withLinedFace,
   withPortShape,
   withTerminalShape,
@@ -28,6 +30,26 @@ describe('item names', () => {
       'Round port 1',
       'Terminal 1',
     ]);
+  });
+});
+
+describe('messages name items as the studio does', () => {
+  it('field paths of the engine and the API read as words', () => {
+    const doc = bookshelf();
+    expect(describeField(doc, 'braces[0].position')).toBe('Shelf brace 1, position');
+    expect(describeField(doc, 'openings[2].length')).toBe('Round port 1, length');
+    expect(describeField(doc, 'openings[0].screwHoles.circleDiameter')).toBe('Driver 1, screw holes circle diameter');
+    expect(describeField(doc, 'braces[0].windows[0].width')).toBe('Shelf brace 1, window 1 width');
+    expect(describeField(doc, 'outer.width')).toBe('Outer width');
+    expect(describeField(doc, 'lining.thickness')).toBe('Lining thickness');
+  });
+
+  it('item paths inside a message become item names; the first letter is a capital', () => {
+    const doc = bookshelf();
+    expect(plainMessage(doc, 'The port tube at openings[2] crosses shelf brace 1')).toBe('The port tube at Round port 1 crosses shelf brace 1');
+    expect(plainMessage(doc, 'a brace at y = 500 mm is outside the cavity')).toBe('A brace at y = 500 mm is outside the cavity');
+    // A path to a field inside an item is left as it is (it names more than the item).
+    expect(plainMessage(doc, 'see openings[2].length')).toBe('See openings[2].length');
   });
 });
 

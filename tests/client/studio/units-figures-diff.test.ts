@@ -2,31 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { planDesign } from '../../../shared/cabinet/index';
 import { diffDesigns } from '../../../src/features/studio/model/diff';
 import { EMPTY_FIGURES, nextFigures, type PlanOutcome } from '../../../src/features/studio/model/figures';
-import { formatLength, parseLength } from '../../../src/features/studio/model/units';
+import { formatLength } from '../../../src/features/studio/model/units';
 import { StudioEditor } from '../../../src/features/studio/model/editor';
 import { bookshelf, floorstander } from './fixtures';
 
-describe('lengths typed in the studio accept either unit', () => {
+describe('lengths in the drawings and read-outs (typed lengths: form-units.test.ts)', () => {
   // 1 in = 25.4 mm exactly (International Yard and Pound Agreement, 1959; REFERENCES.md §8).
-  it.each([
-    ['12 3/8 in', 'mm', 314.325],
-    ['12 3/8"', 'mm', 314.325],
-    ['12.375 in', 'mm', 314.325],
-    ['314.5 mm', 'in', 314.5],
-    ['314.5', 'mm', 314.5],
-    ['12 3/8', 'in', 314.325],
-    ['3/4', 'in', 19.05],
-  ] as const)('"%s" with %s shown is %f mm', (text, units, mm) => {
-    const r = parseLength(text, units);
-    expect(r.ok && r.mm).toBeCloseTo(mm, 9);
-  });
-
-  it('junk gets a clear message, not a number', () => {
-    const r = parseLength('twelve', 'mm');
-    expect(r.ok).toBe(false);
-    expect(!r.ok && r.message).toMatch(/not a length/);
-  });
-
   it('shows inches as sixteenths and can leave the unit off', () => {
     expect(formatLength(314.325, 'in')).toBe('12 3/8"');
     expect(formatLength(314.325, 'in', { unit: false })).toBe('12 3/8');

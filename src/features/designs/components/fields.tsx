@@ -98,6 +98,8 @@ export function LengthField({
   const [draft, setDraft] = useState<string | null>(null);
   const [parseError, setParseError] = useState<string | null>(null);
   const inputRef = useRef<HTMLInputElement | null>(null);
+  /** The value when the box got the focus: Escape goes back to it. */
+  const atFocus = useRef<unknown>(undefined);
 
   // A value set from outside (the studio, a reset, a reload) replaces a draft the person has left.
   useEffect(() => {
@@ -139,6 +141,18 @@ export function LengthField({
           }}
           value={draft ?? shown}
           onChange={(event) => onText(event.target.value)}
+          onFocus={() => {
+            atFocus.current = getValues(name);
+          }}
+          onKeyDown={(event) => {
+            if (event.key !== 'Escape' || draft === null) return;
+            // Escape cancels what was typed since the box got the focus (a dialog around it is not closed).
+            event.preventDefault();
+            event.stopPropagation();
+            field.onChange(atFocus.current);
+            setDraft(null);
+            setParseError(null);
+          }}
           onBlur={() => {
             field.onBlur();
             // Left with a length in it: show it the way the form writes lengths (`12 3/8 in` → `12 3/8`).

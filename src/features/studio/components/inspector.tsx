@@ -133,6 +133,41 @@ function Toggle({
   );
 }
 
+/** An optional part of an item (a driver's rebate, its screw holes): a checkbox adds it with starting values or removes it. */
+function OptionalPart<T>({
+  label,
+  path,
+  value,
+  make,
+  editor,
+  readOnly,
+  children,
+}: {
+  label: string;
+  path: (string | number)[];
+  value: T | undefined;
+  make(): T;
+  editor: StudioEditor;
+  readOnly: boolean;
+  children(value: T): ReactNode;
+}) {
+  return (
+    <Group
+      title={
+        <Toggle
+          label={label}
+          checked={value !== undefined}
+          readOnly={readOnly}
+          testId={`toggle-${path.join('.')}`}
+          onChange={(on) => editor.setField(path, on ? make() : undefined)}
+        />
+      }
+    >
+      {value !== undefined && children(value)}
+    </Group>
+  );
+}
+
 const smallButton = 'rounded px-1.5 py-0.5 text-[12px] focus-visible:outline-2 focus-visible:outline-accent-500';
 
 export function Inspector({ editor, doc, selection, units, readOnly, messages }: InspectorProps) {
@@ -317,43 +352,30 @@ export function Inspector({ editor, doc, selection, units, readOnly, messages }:
           <>
             {L('Cut-out diameter', [...at, 'diameter'], o.diameter)}
             {N('Displacement', [...at, 'displacementLitres'], o.displacementLitres, 'L', { allowEmpty: false })}
-            <Group
-              title={
-                <Toggle
-                  label="Rebate for flush mounting"
-                  checked={o.rebate !== undefined}
-                  readOnly={readOnly}
-                  testId={`toggle-openings.${i}.rebate`}
-                  onChange={(on) => editor.setField([...at, 'rebate'], on ? defaultRebate(o) : undefined)}
-                />
-              }
+            <OptionalPart
+              label="Rebate for flush mounting"
+              path={[...at, 'rebate']}
+              value={o.rebate}
+              make={() => defaultRebate(o)}
+              editor={editor}
+              readOnly={readOnly}
             >
-              {o.rebate && (
+              {(rebate) => (
                 <>
-                  {L('Rebate diameter', [...at, 'rebate', 'diameter'], o.rebate.diameter)}
-                  {L('Rebate depth', [...at, 'rebate', 'depth'], o.rebate.depth)}
+                  {L('Rebate diameter', [...at, 'rebate', 'diameter'], rebate.diameter)}
+                  {L('Rebate depth', [...at, 'rebate', 'depth'], rebate.depth)}
                 </>
               )}
-            </Group>
-            <Group
-              title={
-                <Toggle
-                  label="Screw holes"
-                  checked={o.screwHoles !== undefined}
-                  readOnly={readOnly}
-                  testId={`toggle-openings.${i}.screwHoles`}
-                  onChange={(on) => editor.setField([...at, 'screwHoles'], on ? defaultScrewHoles(o) : undefined)}
-                />
-              }
-            >
-              {o.screwHoles && (
+            </OptionalPart>
+            <OptionalPart label="Screw holes" path={[...at, 'screwHoles']} value={o.screwHoles} make={() => defaultScrewHoles(o)} editor={editor} readOnly={readOnly}>
+              {(screws) => (
                 <>
-                  {N('Count', [...at, 'screwHoles', 'count'], o.screwHoles.count, undefined, { allowEmpty: false, integer: { min: 1, max: 24 } })}
-                  {L('On a circle of', [...at, 'screwHoles', 'circleDiameter'], o.screwHoles.circleDiameter)}
-                  {L('Hole diameter', [...at, 'screwHoles', 'holeDiameter'], o.screwHoles.holeDiameter)}
+                  {N('Count', [...at, 'screwHoles', 'count'], screws.count, undefined, { allowEmpty: false, integer: { min: 1, max: 24 } })}
+                  {L('On a circle of', [...at, 'screwHoles', 'circleDiameter'], screws.circleDiameter)}
+                  {L('Hole diameter', [...at, 'screwHoles', 'holeDiameter'], screws.holeDiameter)}
                 </>
               )}
-            </Group>
+            </OptionalPart>
             <Group title={<span>For port air speed <span className="text-zinc-400">(optional)</span></span>}>
               {N('Cone area Sd', [...at, 'coneAreaCm2'], o.coneAreaCm2, 'cm²', { positive: true })}
               {N('Excursion Xmax', [...at, 'excursionMm'], o.excursionMm, 'mm', { positive: true })}

@@ -381,7 +381,7 @@ export function StudioCanvas({ editor, state, warnings, fitRequest }: StudioCanv
   return (
     <div
       ref={containerRef}
-      className="relative h-full w-full outline-none"
+      className="relative h-full w-full outline-none after:pointer-events-none after:absolute after:inset-0 after:content-[''] focus-visible:after:ring-2 focus-visible:after:ring-accent-400 focus-visible:after:ring-inset"
       style={{ background: CANVAS_BG, cursor }}
       tabIndex={0}
       data-testid="studio-canvas"
