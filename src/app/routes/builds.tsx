@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
 import { can } from '../../../shared/schemas/api.schema';
 import { PageHeader } from '../../components/layouts/app-layout';
-import { Button } from '../../components/ui/button';
+import { Button, ButtonLink } from '../../components/ui/button';
 import { Spinner } from '../../components/ui/spinner';
 import { EmptyState, LoadError } from '../../components/ui/states';
 import { paths } from '../../config/paths';
@@ -55,6 +55,10 @@ export function BuildsRoute() {
               <Button variant="primary" onClick={() => setCreating(true)}>
                 New build
               </Button>
+            ) : canEdit && designs.data?.length === 0 ? (
+              <ButtonLink to={paths.designs.getHref(workshopId)} variant="primary">
+                Go to designs
+              </ButtonLink>
             ) : undefined
           }
         >

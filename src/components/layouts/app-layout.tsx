@@ -95,7 +95,8 @@ export function AppLayout({
                   to={item.to}
                   aria-current={current ? 'page' : undefined}
                   className={cn(
-                    '-mb-px border-b-2 px-3 py-2.5 text-sm whitespace-nowrap',
+                    // The row scrolls sideways on narrow screens, which would clip an outside focus ring: draw it inside.
+                    '-mb-px rounded-t border-b-2 px-3 py-2.5 text-sm whitespace-nowrap focus-visible:-outline-offset-2',
                     current ? 'border-accent-600 text-accent-800' : 'border-transparent text-zinc-600 hover:border-zinc-300 hover:text-zinc-900',
                   )}
                 >

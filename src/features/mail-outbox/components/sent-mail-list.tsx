@@ -53,7 +53,7 @@ export function SentMailList({ workshopId }: { workshopId: number }) {
                 </span>
               </span>
               <Badge>{KIND_LABELS[m.kind] ?? m.kind}</Badge>
-              {m.status === 'failed' ? <Badge tone="warning">Not sent</Badge> : m.caughtAt ? <Badge tone="accent">Caught</Badge> : <Badge>Sent</Badge>}
+              {m.status === 'failed' ? <Badge tone="warning">Not sent</Badge> : m.caughtAt ? <Badge tone="accent">Kept on this computer</Badge> : <Badge>Sent</Badge>}
             </button>
             {open === m.id ? (
               <>
