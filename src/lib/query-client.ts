@@ -10,6 +10,10 @@ declare module '@tanstack/react-query' {
       /** The component shows this mutation's errors itself (inline in a form, in a dialog). */
       inlineErrors?: boolean;
     };
+    queryMeta: {
+      /** The component shows this query's refresh errors itself (a job's progress), so no notice. */
+      inlineErrors?: boolean;
+    };
   }
 }
 
@@ -27,7 +31,7 @@ export function createQueryClient(): QueryClient {
     queryCache: new QueryCache({
       onError: (error, query) => {
         // Only background refreshes of data already on screen: a first load shows its error in place.
-        if (query.state.data !== undefined && shouldNotify(error)) {
+        if (query.state.data !== undefined && !query.meta?.inlineErrors && shouldNotify(error)) {
           notify(`Could not refresh: ${messageOf(error)}`, 'error');
         }
       },

@@ -29,6 +29,8 @@ export function useNestJob(workshopId: number, jobId: string | null) {
     enabled: jobId !== null,
     refetchInterval: (query) => (isFinished(query.state.data) || query.state.status === 'error' ? false : 400),
     staleTime: 0,
+    // Make cut plan says "lost contact" or "not finished" itself.
+    meta: { inlineErrors: true },
   });
 }
 
