@@ -7,10 +7,11 @@ import type { Page } from 'playwright-core';
 import { DEMO_BOOKSHELF } from '../../shared/demo/designs';
 import { DEMO, expect, type E2EContext, type E2ETest } from './harness';
 
-const SIZES = [
+type Size = { width: number; height: number };
+const SIZES: readonly Size[] = [
   { width: 1280, height: 800 },
   { width: 1920, height: 1080 },
-] as const;
+];
 
 async function arrange(ctx: E2EContext, name: string, change: (d: typeof DEMO_BOOKSHELF) => typeof DEMO_BOOKSHELF): Promise<string> {
   const api = await ctx.api(DEMO.designer);
@@ -27,7 +28,7 @@ async function open(
   ctx: E2EContext,
   session: { page(): Promise<Page>; email: string; signedIn: boolean },
   path: string,
-  size: (typeof SIZES)[number],
+  size: Size,
 ): Promise<Page> {
   const page = await session.page();
   await page.setViewportSize(size);
@@ -43,7 +44,7 @@ async function open(
   return page;
 }
 
-const shot = (ctx: E2EContext, page: Page, name: string, size: (typeof SIZES)[number]) => ctx.screenshot(`look-${name}-${size.width}`, page);
+const shot = (ctx: E2EContext, page: Page, name: string, size: Size) => ctx.screenshot(`look-${name}-${size.width}`, page);
 
 const tests: E2ETest[] = [
   {
@@ -107,6 +108,13 @@ const tests: E2ETest[] = [
         await v.screenshot({ path: `.tmp/screens/look-viewer-full-${size.width}.png`, fullPage: true });
         await v.close();
       }
+      // A tablet held upright (820 × 1180): the bar, the toolbar and the studio still fit.
+      const tablet: Size = { width: 820, height: 1180 };
+      const t = await open(ctx, designer, plain, tablet);
+      await shot(ctx, t, 'designer', tablet);
+      const overflow = await t.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+      expect(overflow <= 0, `the design page should not scroll sideways at 820 px, it is ${overflow} px too wide`);
+      await t.close();
     },
   },
 ];
