@@ -31,7 +31,7 @@ export function ChecklistRoute() {
       <title>{workshopTitle(list.data ? `Checklist: ${list.data.buildName}` : 'Checklist', membership.workshopName)}</title>
       <PageHeader
         title={list.data ? `Checklist: ${list.data.buildName}` : 'Checklist'}
-        description={canTick ? 'Tap a piece when it is cut. Every tick records who and when.' : 'Progress of the cut (your role reads it; makers tick).'}
+        description={canTick ? 'Tap a piece when it is cut. Every tick records who and when.' : 'Progress at the saw: owners and makers tick pieces as they are cut.'}
         back={<Link to={paths.checklists.getHref(workshopId)} className="text-accent-700 hover:underline">← All checklists</Link>}
         actions={
           can(membership.role, 'exportPlans') ? (

@@ -8,7 +8,7 @@ export function BuildsTable({ builds, buildHref }: { builds: BuildDto[]; buildHr
   return (
     <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
       <table className="w-full text-sm">
-        <thead className="border-b border-zinc-200 bg-zinc-50 text-left text-[13px] text-zinc-500">
+        <thead className="border-b border-zinc-200 bg-zinc-50 text-left text-[13px] whitespace-nowrap text-zinc-500">
           <tr>
             <th scope="col" className="px-4 py-2.5 font-normal">Build</th>
             <th scope="col" className="px-4 py-2.5 font-normal">Cabinets</th>

@@ -140,7 +140,9 @@ export function ChecklistView({ workshopId, list, canTick }: { workshopId: numbe
       <aside className="space-y-6 lg:col-start-2 lg:row-span-2 lg:row-start-1">
         <section aria-label="Sheets">
           <h2 className="mb-1 text-lg font-bold text-zinc-900">Sheets</h2>
-          <p className="mb-3 text-[13px] text-zinc-500">Marking a sheet cut takes it out of the stock room and keeps its offcuts as remnants. Undo puts it back.</p>
+          {canTick ? (
+            <p className="mb-3 text-[13px] text-zinc-500">Marking a sheet cut takes it out of the stock room and keeps its offcuts as remnants. Undo puts it back.</p>
+          ) : null}
           <div className="mb-3">
             <Progress progress={list.sheetsProgress} />
           </div>

@@ -43,7 +43,11 @@ export function InviteForm({ workshopId }: { workshopId: number }) {
           </Select>
         )}
       </Field>
-      <div className="pt-[1.3rem]">
+      <div>
+        {/* An empty label line of the fields' height, so the button lines up with the inputs. */}
+        <span aria-hidden="true" className="mb-1 block text-[13px]">
+          &nbsp;
+        </span>
         <Button type="submit" variant="primary" busy={invite.isPending}>
           Send invitation
         </Button>
