@@ -2,8 +2,8 @@
  * The build checklist in the browser: a maker ticks pieces (big touch targets, also at tablet size) and
  * marks a sheet cut, which takes it out of the stock room; a viewer sees the progress without controls.
  */
-import type { APIRequestContext } from 'playwright-core';
-import { DEMO, expect, type E2ETest } from './harness';
+import type { APIRequestContext, Page } from 'playwright-core';
+import { DEMO, expect, type E2EContext, type E2ETest } from './harness';
 
 const BUILD = 'Harbour Lane pair + floorstanders';
 
@@ -22,6 +22,14 @@ async function makePlan(maker: APIRequestContext): Promise<{ workshopId: number;
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error('the nest job did not finish');
+}
+
+/** A maker signed in, and a new cut plan of the demo build to work on. */
+async function makerAtNewPlan(ctx: E2EContext): Promise<{ workshopId: number; planId: number; page: Page }> {
+  const { workshopId, planId } = await makePlan(await ctx.api(DEMO.maker));
+  const page = await ctx.page();
+  await ctx.signIn(page, DEMO.maker);
+  return { workshopId, planId, page };
 }
 
 const tests: E2ETest[] = [
@@ -98,10 +106,7 @@ const tests: E2ETest[] = [
     name: 'the checklist names the sheets as the cut plan page does; on a tablet the sheets and cautions come before the pieces',
     timeoutMs: 90_000,
     async run(ctx) {
-      const maker = await ctx.api(DEMO.maker);
-      const { workshopId, planId } = await makePlan(maker);
-      const page = await ctx.page();
-      await ctx.signIn(page, DEMO.maker);
+      const { workshopId, planId, page } = await makerAtNewPlan(ctx);
 
       // The cut plan page: "Sheet 2 · MDF 18 mm · 2440 × 1220 mm" → "Sheet 2" (the name printed on the cut diagrams).
       await page.goto(`${ctx.baseUrl}/w/${workshopId}/cut-plans/${planId}`);
@@ -217,10 +222,7 @@ const tests: E2ETest[] = [
     name: 'a share link shows one cut plan without an account, until it is withdrawn',
     timeoutMs: 90_000,
     async run(ctx) {
-      const maker = await ctx.api(DEMO.maker);
-      const { workshopId, planId } = await makePlan(maker);
-      const page = await ctx.page();
-      await ctx.signIn(page, DEMO.maker);
+      const { workshopId, planId, page } = await makerAtNewPlan(ctx);
       await page.goto(`${ctx.baseUrl}/w/${workshopId}/cut-plans/${planId}/share`);
       await page.getByLabel('Send it to (optional)').fill('client@outside.test');
       await page.getByLabel('Note in the e-mail (optional)').fill('The panels for your pair.');
