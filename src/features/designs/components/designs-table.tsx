@@ -13,7 +13,7 @@ import type { DesignSummaryDto } from '../../../../shared/schemas/api.schema';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/dialog';
 import { Input } from '../../../components/ui/field';
-import { SortableTableHead } from '../../../components/ui/table-head';
+import { SortableTableHead, columnClassName, isNumericColumn } from '../../../components/ui/table-head';
 import { cn } from '../../../lib/cn';
 import { formatDateTime, formatRelativeTime, formatSizeMm } from '../../../lib/format';
 import { notify } from '../../../lib/notify';
@@ -78,6 +78,8 @@ export function DesignsTable({
       column.accessor((d) => Date.parse(d.updatedAt), {
         id: 'updatedAt',
         header: 'Updated',
+        // Hidden on a tablet so the row's buttons stay in view.
+        meta: { className: 'hidden xl:table-cell' },
         cell: (info) => {
           const d = info.row.original;
           return (
@@ -167,9 +169,9 @@ export function DesignsTable({
             {rows.map((row) => (
               <tr key={row.id} className="hover:bg-zinc-50/70" data-testid="design-row">
                 {row.getVisibleCells().map((cell) => {
-                  const numeric = (cell.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
+                  const meta = cell.column.columnDef.meta;
                   return (
-                    <td key={cell.id} className={cn('px-5 py-2.5 text-zinc-700', numeric && 'text-right')}>
+                    <td key={cell.id} className={cn('px-5 py-2.5 text-zinc-700', isNumericColumn(meta) && 'text-right', columnClassName(meta))}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   );
