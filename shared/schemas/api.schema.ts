@@ -148,8 +148,8 @@ export const stockUpdateInput = z.object({
   item: stockInput,
 });
 
-export interface StockItemDto {
-  id: number;
+/** What a piece of stock is: shared by the stock room and the cut plan's snapshot of it. */
+export interface StockFieldsDto {
   kind: StockKind;
   material: string;
   thicknessMm: number;
@@ -163,6 +163,10 @@ export interface StockItemDto {
   /** Per sheet or remnant; per metre for a roll. */
   cost: number | null;
   grain: GrainKind;
+}
+
+export interface StockItemDto extends StockFieldsDto {
+  id: number;
   note: string;
   /** For a remnant: the cut plan it was kept from. */
   fromPlanId: number | null;
@@ -316,20 +320,11 @@ export interface NestJobDto {
 }
 
 /** A stock item as the cut plan used it (a snapshot: the stock room may change later). */
-export interface CutPlanStockDto {
+export interface CutPlanStockDto extends StockFieldsDto {
   /** The nest job's stock id (what layout sheets name): `#12` for stock room item 12, `typed 1` for typed-in stock. */
   id: string;
   /** The stock room item, or null for typed-in stock. */
   stockItemId: number | null;
-  kind: StockKind;
-  material: string;
-  thicknessMm: number;
-  widthMm: number;
-  heightMm: number | null;
-  lengthMm: number | null;
-  quantity: number | null;
-  cost: number | null;
-  grain: GrainKind;
   trimMm: number;
 }
 
