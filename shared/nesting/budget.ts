@@ -67,6 +67,18 @@ export class Budget {
     return this.now ? this.now() - this.start : 0;
   }
 
+  /**
+   * A budget for one part of the search: `share` of the work left, the same deadline and stop
+   * callback. Its end does not end this one.
+   */
+  child(share: number): Budget {
+    const workLeft = Math.max(0, this.workLimit - work.n);
+    const msLeft = this.now ? Math.max(0, this.deadline - this.now()) : this.timeLimitMs;
+    const b = new Budget(msLeft, this.now, this.shouldStop, 1, this.onTick, workLeft * share);
+    if (this.stopped) b.stopped = true;
+    return b;
+  }
+
   cancelled(): boolean {
     return this.shouldStop?.() ?? false;
   }

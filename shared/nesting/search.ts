@@ -25,6 +25,7 @@ import type { Budget } from './budget.js';
 import { decode, type DecodeOptions, type Packing } from './decode.js';
 import type { PackBin } from './bins.js';
 import type { Problem } from './problem.js';
+import { expandPacking, mergeItems } from './merge.js';
 import { randomInt, type Rng } from './rng.js';
 
 /** Search knobs (defaults chosen by measurement on the bench; see DEVELOPERS.md). */
@@ -36,6 +37,13 @@ export const tuning = {
   randomRestart: false,
   repack: true,
   repackStale: 0,
+  /** Share of the budget for the super-item search (merge.ts), on jobs of at most mergeMaxItems parts. */
+  mergeShare: 0.4,
+  mergeMaxItems: 300,
+  mergeStep: 0.15,
+  mergeMin: 0.8,
+  /** Only when the parts would fill the sheets at the area bound to at least this share. */
+  mergeFill: 0.97,
 };
 
 export interface SearchContext {
@@ -350,8 +358,45 @@ function makeEmpty(pr: Problem, t: number, opts: DecodeOptions): PackBin {
   return decode(pr, [], opts, [t]).bins[0]!;
 }
 
-/** Sheets, remnants and fixed-length rolls: fewest sheets (or lowest cost). */
+/**
+ * Sheets, remnants and fixed-length rolls: fewest sheets (or lowest cost). Small jobs that end one
+ * sheet or more above the bound get a second search over super-items (merge.ts) with the budget left.
+ */
 export function solveBins(pr: Problem, ctx: SearchContext): Packing {
+  if (tuning.mergeShare <= 0 || pr.items.length > tuning.mergeMaxItems || fillAtAreaBound(pr) < tuning.mergeFill) return solveBinsCore(pr, ctx);
+  const first = solveBinsCore(pr, { ...ctx, budget: ctx.budget.child(1 - tuning.mergeShare) });
+  let best = first;
+  let primary = primaryOf(pr, best);
+  while (best.leftover.length === 0 && primary > ctx.lowerBound + 1e-9 && !ctx.budget.expired()) {
+    const m = mergeItems(pr, ctx.rng, tuning.mergeMin + (1 - tuning.mergeMin) * ctx.rng());
+    if (!m) break;
+    const p = solveBinsCore(m.pr, { ...ctx, onImprove: undefined, lowerBound: Math.max(ctx.lowerBound, primary - 1), budget: ctx.budget.child(tuning.mergeStep) });
+    if (p.leftover.length > 0) continue;
+    const e = expandPacking(pr, m, p);
+    if (primaryOf(pr, e) < primary - 1e-9) {
+      best = e;
+      primary = primaryOf(pr, e);
+      ctx.onImprove?.(primary);
+    }
+  }
+  return best;
+}
+
+/**
+ * How full the sheets would be at the area bound (largest counted sheet size): near 1 only a
+ * layout with almost no waste reaches it, which is where whole groups of parts must be placed as one.
+ */
+function fillAtAreaBound(pr: Problem): number {
+  let sheet = 0;
+  for (const t of pr.types) if (t.kind !== 'remnant' && Number.isFinite(t.H)) sheet = Math.max(sheet, t.W * t.H);
+  if (sheet <= 0) return 0;
+  let area = 0;
+  for (const it of pr.items) area += it.area;
+  const k = Math.max(1, Math.ceil(area / sheet - 1e-9));
+  return area / (k * sheet);
+}
+
+function solveBinsCore(pr: Problem, ctx: SearchContext): Packing {
   const { budget } = ctx;
   let best: Packing | null = null;
   let bestOpts: DecodeOptions = { rule: RULE_BSSF, split: SPLIT_SHORTER_LEFTOVER, bestFit: false };
