@@ -48,10 +48,13 @@ export interface MemberDto {
 
 export const memberRoleInput = z.object({ role: roleSchema });
 
+/** The version a client loaded, sent back with every update (optimistic locking → 409 when stale). */
+export const versionSchema = z.number({ error: 'version is required' }).int().min(1);
+
 /** Create: the design JSON itself. Update: the design with the version the client loaded. */
 export const designCreateInput = designSchema;
 export const designUpdateInput = z.object({
-  version: z.number({ error: 'version is required' }).int().min(1),
+  version: versionSchema,
   design: designSchema,
 });
 export type DesignUpdateInput = z.input<typeof designUpdateInput>;
@@ -144,7 +147,7 @@ export type StockInput = z.input<typeof stockInput>;
 export type StockValues = z.output<typeof stockInput>;
 
 export const stockUpdateInput = z.object({
-  version: z.number({ error: 'version is required' }).int().min(1),
+  version: versionSchema,
   item: stockInput,
 });
 
@@ -234,7 +237,7 @@ export type BuildInput = z.input<typeof buildInput>;
 export type BuildValues = z.output<typeof buildInput>;
 
 export const buildUpdateInput = z.object({
-  version: z.number({ error: 'version is required' }).int().min(1),
+  version: versionSchema,
   build: buildInput,
 });
 

@@ -45,6 +45,10 @@ describe('stock room', () => {
     expect(edited.body).toMatchObject({ quantity: 5, version: 2 });
     const stale = await maker.put(`${base()}/${item.id}`).send({ version: 1, item: { ...item, quantity: 4 } });
     expect(stale.status).toBe(409);
+    // An update's field errors use the same paths as a create (`widthMm`, not `item.widthMm`).
+    const bad = await maker.put(`${base()}/${item.id}`).send({ item: { ...item, widthMm: 0 } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toMatchObject({ version: 'version is required', widthMm: 'width must be greater than 0' });
 
     const history = (await maker.get(`/api/workshops/${wid}/history/stock/${item.id}`).expect(200)).body.items;
     expect(history.map((e: { action: string; summary: string }) => [e.action, e.summary])).toEqual([

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { ZodError } from 'zod';
+import { parseVersionedBody } from '../../middleware/versioned-body.js';
 import { STOCK_KINDS, stockUpdateInput, type StockKind } from '../../../shared/schemas/api.schema.js';
 import { accessOf, idParam, requireRole, requireUser, userOf, type RoleLookup } from '../../middleware/auth.js';
 import { singleFile } from '../uploads/uploads.routes.js';
@@ -41,12 +41,9 @@ export function stockRoutes(stock: StockService, uploads: UploadsService, lookup
 
   router.put('/:id', manage, async (req, res) => {
     const id = idParam(req, 'id');
-    const body = stockUpdateInput.safeParse(req.body);
     // Item errors keep the form's paths (`widthMm`, not `item.widthMm`), like designs.
-    if (!body.success) {
-      throw new ZodError(body.error.issues.map((i) => (i.path[0] === 'item' ? { ...i, path: i.path.slice(1) } : i)));
-    }
-    res.json(await stock.update(accessOf(res).workshopId, id, body.data.version, body.data.item, userOf(req).email));
+    const { version, item } = parseVersionedBody(stockUpdateInput, req.body, 'item');
+    res.json(await stock.update(accessOf(res).workshopId, id, version, item, userOf(req).email));
   });
 
   router.delete('/:id', manage, async (req, res) => {
