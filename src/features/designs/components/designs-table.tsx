@@ -1,20 +1,11 @@
-import {
-  createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type SortingState,
-} from '@tanstack/react-table';
+import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import type { DesignSummaryDto } from '../../../../shared/schemas/api.schema';
 import { Button } from '../../../components/ui/button';
-import { ConfirmDialog } from '../../../components/ui/dialog';
+import { ConfirmDeleteDialog } from '../../../components/data-table/confirm-delete-dialog';
+import { DataTable, RowCount, useDataTable } from '../../../components/data-table/data-table';
 import { Input } from '../../../components/ui/field';
-import { SortableTableHead, columnClassName, isNumericColumn } from '../../../components/ui/table-head';
-import { cn } from '../../../lib/cn';
 import { formatDateTime, formatRelativeTime, formatSizeMm } from '../../../lib/format';
 import { notify } from '../../../lib/notify';
 import { useDeleteDesign } from '../api/delete-design';
@@ -41,7 +32,6 @@ export function DesignsTable({
   designHref: (designId: number) => string;
 }) {
   const navigate = useNavigate();
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'updatedAt', desc: true }]);
   const [filter, setFilter] = useState('');
   const [deleting, setDeleting] = useState<DesignSummaryDto | null>(null);
   const duplicate = useDuplicateDesign(workshopId);
@@ -132,19 +122,14 @@ export function DesignsTable({
     [canEdit, designHref, duplicate, navigate],
   );
 
-  const table = useReactTable({
+  const table = useDataTable({
     data: designs,
     columns,
-    state: { sorting, globalFilter: filter },
-    onSortingChange: setSorting,
-    onGlobalFilterChange: setFilter,
-    globalFilterFn: (row, _columnId, value: string) => matchesFilter(row.original, value),
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
+    initialSorting: [{ id: 'updatedAt', desc: true }],
+    filterKey: filter,
+    matches: (design) => matchesFilter(design, filter),
   });
-
-  const rows = table.getRowModel().rows;
+  const shown = table.getRowModel().rows.length;
 
   return (
     <>
@@ -158,64 +143,29 @@ export function DesignsTable({
             onChange={(event) => setFilter(event.target.value)}
           />
         </div>
-        <p className="text-sm text-zinc-500" aria-live="polite">
-          {rows.length === designs.length ? `${designs.length} designs` : `${rows.length} of ${designs.length} designs`}
-        </p>
+        <RowCount shown={shown} total={designs.length} noun="designs" />
       </div>
-      <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
-        <table className="w-full text-sm" data-testid="designs-table">
-          <SortableTableHead table={table} />
-          <tbody className="divide-y divide-zinc-100">
-            {rows.map((row) => (
-              <tr key={row.id} className="hover:bg-zinc-50/70" data-testid="design-row">
-                {row.getVisibleCells().map((cell) => {
-                  const meta = cell.column.columnDef.meta;
-                  return (
-                    <td key={cell.id} className={cn('px-5 py-2.5 text-zinc-700', isNumericColumn(meta) && 'text-right', columnClassName(meta))}>
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </td>
-                  );
-                })}
-              </tr>
-            ))}
-            {rows.length === 0 ? (
-              <tr>
-                <td colSpan={columns.length} className="px-5 py-10 text-center text-zinc-500">
-                  {designs.length === 0 ? 'No designs yet.' : 'No design matches that filter.'}
-                </td>
-              </tr>
-            ) : null}
-          </tbody>
-        </table>
-      </div>
-      <ConfirmDialog
-        open={deleting !== null}
+      <DataTable
+        table={table}
+        testId="designs-table"
+        rowTestId="design-row"
+        empty={designs.length === 0 ? 'No designs yet.' : 'No design matches that filter.'}
+      />
+      <ConfirmDeleteDialog
+        item={deleting}
         title="Delete this design?"
         confirmLabel="Delete design"
-        tone="danger"
-        busy={remove.isPending}
-        error={remove.error?.message}
-        onCancel={() => {
-          setDeleting(null);
-          remove.reset();
-        }}
-        onConfirm={() =>
-          deleting &&
-          remove.mutate(deleting.id, {
-            onSuccess: () => {
-              notify(`Deleted “${deleting.name}”.`, 'success');
-              setDeleting(null);
-            },
-          })
-        }
+        mutation={remove}
+        onClose={() => setDeleting(null)}
+        onDeleted={(design) => notify(`Deleted “${design.name}”.`, 'success')}
       >
-        {deleting ? (
+        {(design) => (
           <p>
-            <strong className="text-zinc-900">{deleting.name}</strong> will be deleted for everyone in the workshop. This
+            <strong className="text-zinc-900">{design.name}</strong> will be deleted for everyone in the workshop. This
             cannot be undone.
           </p>
-        ) : null}
-      </ConfirmDialog>
+        )}
+      </ConfirmDeleteDialog>
     </>
   );
 }

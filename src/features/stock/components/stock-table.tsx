@@ -1,19 +1,11 @@
-import {
-  createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type SortingState,
-} from '@tanstack/react-table';
-import { Fragment, useMemo, useState } from 'react';
+import { createColumnHelper } from '@tanstack/react-table';
+import { useMemo, useState } from 'react';
 import type { StockItemDto, StockKind } from '../../../../shared/schemas/api.schema';
 import { HistoryList } from '../../../components/history/history-list';
 import { Button } from '../../../components/ui/button';
-import { ConfirmDialog } from '../../../components/ui/dialog';
+import { ConfirmDeleteDialog } from '../../../components/data-table/confirm-delete-dialog';
+import { DataTable, RowCount, useDataTable } from '../../../components/data-table/data-table';
 import { Input } from '../../../components/ui/field';
-import { columnClassName, isNumericColumn, SortableTableHead } from '../../../components/ui/table-head';
 import { cn } from '../../../lib/cn';
 import { formatNumber, formatRelativeTime } from '../../../lib/format';
 import { useDeleteStockItem } from '../api/stock';
@@ -40,7 +32,6 @@ function matches(s: StockItemDto, kind: StockKind | 'all', text: string): boolea
 
 /** Sheets, remnants and rolls with sort and filter; edit, delete and history per row. */
 export function StockTable({ workshopId, items, canManage, onEdit }: { workshopId: number; items: StockItemDto[]; canManage: boolean; onEdit: (item: StockItemDto) => void }) {
-  const [sorting, setSorting] = useState<SortingState>([]);
   const [kind, setKind] = useState<StockKind | 'all'>('all');
   const [text, setText] = useState('');
   const [open, setOpen] = useState<number | null>(null);
@@ -120,17 +111,8 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
     [canManage, onEdit, open],
   );
 
-  const table = useReactTable({
-    data: items,
-    columns,
-    state: { sorting, globalFilter: `${kind}|${text}` },
-    onSortingChange: setSorting,
-    globalFilterFn: (row) => matches(row.original, kind, text),
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-  });
-  const rows = table.getRowModel().rows;
+  const table = useDataTable({ data: items, columns, filterKey: `${kind}|${text}`, matches: (s) => matches(s, kind, text) });
+  const shown = table.getRowModel().rows.length;
 
   return (
     <>
@@ -151,65 +133,32 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
         <div className="w-full sm:w-72">
           <Input type="search" placeholder="Filter by material, thickness or note" aria-label="Filter stock" value={text} onChange={(e) => setText(e.target.value)} />
         </div>
-        <p className="ml-auto text-sm text-zinc-500" aria-live="polite">
-          {rows.length === items.length ? `${items.length} items` : `${rows.length} of ${items.length} items`}
-        </p>
+        <RowCount shown={shown} total={items.length} noun="items" className="ml-auto" />
       </div>
-      <div className="overflow-x-auto rounded-xl border border-zinc-200 bg-white shadow-xs">
-        <table className="w-full text-sm" data-testid="stock-table">
-          <SortableTableHead table={table} cellClassName="px-3 py-2.5 first:pl-4" />
-          <tbody className="divide-y divide-zinc-100">
-            {rows.map((row) => (
-              <Fragment key={row.id}>
-                <tr className="hover:bg-zinc-50/70" data-testid="stock-row">
-                  {row.getVisibleCells().map((cell) => (
-                    <td
-                      key={cell.id}
-                      className={cn('px-3 py-2.5 text-zinc-700 first:pl-4', isNumericColumn(cell.column.columnDef.meta) && 'text-right tabular-nums', columnClassName(cell.column.columnDef.meta))}
-                    >
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </td>
-                  ))}
-                </tr>
-                {open === row.original.id ? (
-                  <tr className="bg-zinc-50/60">
-                    <td colSpan={columns.length} className="px-6 py-3">
-                      <h3 className="mb-2 text-[13px] font-bold text-zinc-700">History</h3>
-                      <HistoryList workshopId={workshopId} subjectType="stock" subjectId={row.original.id} />
-                    </td>
-                  </tr>
-                ) : null}
-              </Fragment>
-            ))}
-            {rows.length === 0 ? (
-              <tr>
-                <td colSpan={columns.length} className="px-5 py-10 text-center text-zinc-500">
-                  {items.length === 0
-                    ? canManage
-                      ? 'The stock room is empty. Add the sheets, remnants and rolls you have, or import them from a CSV file.'
-                      : 'The stock room is empty.'
-                    : 'Nothing matches that filter.'}
-                </td>
-              </tr>
-            ) : null}
-          </tbody>
-        </table>
-      </div>
-      <ConfirmDialog
-        open={deleting !== null}
-        title="Remove from the stock room?"
-        confirmLabel="Remove"
-        tone="danger"
-        busy={remove.isPending}
-        error={remove.error?.message}
-        onCancel={() => {
-          remove.reset();
-          setDeleting(null);
-        }}
-        onConfirm={() => deleting && remove.mutate(deleting.id, { onSuccess: () => setDeleting(null) })}
-      >
-        {deleting ? `${KIND_LABELS[deleting.kind]} ${deleting.thicknessMm} mm ${deleting.material}, ${stockSize(deleting)}. Cut plans made earlier keep their own copy.` : null}
-      </ConfirmDialog>
+      <DataTable
+        table={table}
+        testId="stock-table"
+        rowTestId="stock-row"
+        cellClassName="px-3 py-2.5 first:pl-4"
+        empty={
+          items.length === 0
+            ? canManage
+              ? 'The stock room is empty. Add the sheets, remnants and rolls you have, or import them from a CSV file.'
+              : 'The stock room is empty.'
+            : 'Nothing matches that filter.'
+        }
+        renderDetail={(row) =>
+          open === row.original.id ? (
+            <>
+              <h3 className="mb-2 text-[13px] font-bold text-zinc-700">History</h3>
+              <HistoryList workshopId={workshopId} subjectType="stock" subjectId={row.original.id} />
+            </>
+          ) : null
+        }
+      />
+      <ConfirmDeleteDialog item={deleting} title="Remove from the stock room?" confirmLabel="Remove" mutation={remove} onClose={() => setDeleting(null)}>
+        {(s) => `${KIND_LABELS[s.kind]} ${s.thicknessMm} mm ${s.material}, ${stockSize(s)}. Cut plans made earlier keep their own copy.`}
+      </ConfirmDeleteDialog>
     </>
   );
 }
