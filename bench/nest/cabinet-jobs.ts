@@ -2,7 +2,9 @@
  * Generated cabinet jobs for the bench: cabinets of six invented families (bookshelf, stand-mount,
  * slim and large floor-standers, subwoofer, centre), sizes drawn with a fixed seed, planned by the
  * cabinet engine (planDesign), taken as stereo pairs, batches and a home-theatre set, with and without
- * grain, on 2440 × 1220 mm MDF sheets (REFERENCES.md §7, common practice), kerf 3.2 mm, trim 10 mm.
+ * grain, kerf 3.2 mm, trim 10 mm, on each sheet size REFERENCES.md §7 lists (common practice):
+ * 2440 × 1220, 3050 × 1220, 2800 × 2070, 2500 × 1250 and 1525 × 1525 mm. The size list was fixed from
+ * the references before any run on it, so no size was picked for how the packers fare on it.
  * Also the lining pieces of each job on a 1200 mm roll, and the 200- and 2000-part jobs.
  */
 import type { DesignInput } from '../../shared/schemas/design.schema.js';
@@ -59,15 +61,32 @@ export function makeDesign(family: Family, rng: Rng, name: string): DesignInput 
 export interface CabinetJob {
   name: string;
   grain: boolean;
+  /** Sheet size, e.g. "2440 × 1220". */
+  sheet: string;
   /** Panels on sheets. */
   sheets: NestJobInput;
   /** Lining pieces on a 1200 mm roll. */
   lining: NestJobInput;
 }
 
-const SHEET = { width: 2440, height: 1220 };
+/** Sheet sizes (length × width, mm) from REFERENCES.md §7. */
+export const SHEET_SIZES: readonly { width: number; height: number }[] = [
+  { width: 2440, height: 1220 },
+  { width: 3050, height: 1220 },
+  { width: 2800, height: 2070 },
+  { width: 2500, height: 1250 },
+  { width: 1525, height: 1525 },
+];
 
-function jobFrom(name: string, cabinets: { design: DesignInput; count: number }[], grain: boolean, mode: 'free' | 'guillotine'): CabinetJob {
+const sheetLabel = (s: { width: number; height: number }) => `${s.width} × ${s.height}`;
+
+function jobFrom(
+  name: string,
+  cabinets: { design: DesignInput; count: number }[],
+  grain: boolean,
+  mode: 'free' | 'guillotine',
+  SHEET: { width: number; height: number } = SHEET_SIZES[0]!,
+): CabinetJob {
   const parts: NestJobInput['parts'] = [];
   const lining: NestJobInput['parts'] = [];
   const thicknesses = new Set<number>();
@@ -104,12 +123,13 @@ function jobFrom(name: string, cabinets: { design: DesignInput; count: number }[
   return {
     name,
     grain,
+    sheet: sheetLabel(SHEET),
     sheets: { kerf: 3.2, mode, seed: 1, timeLimitMs: 2000, stock, parts },
     lining: { kerf: 0, mode: 'free', seed: 1, timeLimitMs: 2000, stock: [{ id: 'batt-1200', kind: 'roll', width: 1200, material: 'polyester', cost: 6 }], parts: lining },
   };
 }
 
-/** The bench's cabinet jobs: every set with and without grain. */
+/** The bench's cabinet jobs: every set on every sheet size, with and without grain. */
 export function cabinetJobs(mode: 'free' | 'guillotine' = 'free'): CabinetJob[] {
   const rng = mulberry32(2024);
   const d = (f: Family) => makeDesign(f, rng, f);
@@ -133,9 +153,11 @@ export function cabinetJobs(mode: 'free' | 'guillotine' = 'free'): CabinetJob[] 
   });
   sets.push({ name: 'two pairs (bookshelf + floorstander)', cabinets: [{ design: d('bookshelf'), count: 2 }, { design: d('slim floorstander'), count: 2 }] });
   const jobs: CabinetJob[] = [];
-  for (const s of sets) {
-    jobs.push(jobFrom(s.name, s.cabinets, false, mode));
-    jobs.push(jobFrom(s.name, s.cabinets, true, mode));
+  for (const size of SHEET_SIZES) {
+    for (const s of sets) {
+      jobs.push(jobFrom(s.name, s.cabinets, false, mode, size));
+      jobs.push(jobFrom(s.name, s.cabinets, true, mode, size));
+    }
   }
   return jobs;
 }

@@ -4,7 +4,12 @@
  * - the big-item count (items that cannot share a bin with each other);
  * - L1 and L2 of S. Martello & D. Vigo, "Exact Solution of the Two-Dimensional Finite Bin Packing
  *   Problem", Management Science 44(3):388–399, 1998;
- * - L3 of the same paper, for the oriented case.
+ * - L3 of the same paper, for the oriented case;
+ * - a grid-point count, valid when parts turn: an item whose shorter side is at least s holds an
+ *   s × s square, and a W × H bin holds at most ⌊W/s⌋·⌊H/s⌋ disjoint axis-parallel s × s squares
+ *   (each half-open square (x, x+s] × (y, y+s] inside the bin contains exactly one point of the
+ *   grid {i·s} × {j·s}, 1 ≤ i ≤ ⌊W/s⌋, 1 ≤ j ≤ ⌊H/s⌋, and disjoint squares contain different points:
+ *   a pigeonhole argument), so n items of shorter side ≥ s need ⌈n / (⌊W/s⌋·⌊H/s⌋)⌉ bins.
  * When an item may turn, the sets of L1/L2 only take an item whose every allowed orientation
  * qualifies, with its smallest qualifying size: a relaxation, so the bound stays valid (in the
  * spirit of Dell'Amico, Martello & Vigo, Discrete Applied Mathematics 118:13–24, 2002).
@@ -25,6 +30,8 @@ export interface BinBounds {
   L2: number;
   /** Oriented case only; 0 when some item may turn. */
   L3: number;
+  /** Grid-point count of items by their shorter side (valid with turning). */
+  count: number;
   best: number;
 }
 
@@ -170,8 +177,24 @@ function boundL3(items: BoundItem[], W: number, H: number): number {
   return best;
 }
 
+/** The grid-point count bound (see the header): max over s of ⌈n_s / (⌊W/s⌋·⌊H/s⌋)⌉. */
+export function countBound(W: number, H: number, items: BoundItem[]): number {
+  const sides = items.map((it) => Math.min(it.w, it.h)).sort((a, b) => b - a);
+  let best = 0;
+  for (let n = 1; n <= sides.length; n++) {
+    const s = sides[n - 1]!;
+    // Only where the next side is smaller: n items have a shorter side ≥ s.
+    if (n < sides.length && sides[n]! >= s - TOL) continue;
+    if (s <= TOL) break;
+    const per = Math.floor(W / s + TOL) * Math.floor(H / s + TOL);
+    if (per === 0) continue; // items that fit nowhere are the caller's to report
+    best = Math.max(best, Math.ceil(n / per));
+  }
+  return best;
+}
+
 export function binLowerBounds(W: number, H: number, items: BoundItem[]): BinBounds {
-  if (items.length === 0) return { L0: 0, big: 0, L1: 0, L2: 0, L3: 0, best: 0 };
+  if (items.length === 0) return { L0: 0, big: 0, L1: 0, L2: 0, L3: 0, count: 0, best: 0 };
   let area = 0;
   let big = 0;
   let oriented = true;
@@ -186,5 +209,6 @@ export function binLowerBounds(W: number, H: number, items: BoundItem[]): BinBou
   const L1 = Math.max(a.l1, b.l1);
   const L2 = Math.max(a.l2, b.l2, L1);
   const L3 = oriented ? boundL3(items, W, H) : 0;
-  return { L0, big, L1, L2, L3, best: Math.max(L0, big, L1, L2, L3) };
+  const count = countBound(W, H, items);
+  return { L0, big, L1, L2, L3, count, best: Math.max(L0, big, L1, L2, L3, count) };
 }

@@ -69,4 +69,43 @@ describe('lower bounds (Martello & Vigo 1998, REFERENCES.md §10)', () => {
     // 6 × 6 cannot share a 10 × 10 bin in any orientation: the big-item count is 2.
     expect(binLowerBounds(10, 10, [{ w: 6, h: 6, turn: true }, { w: 6, h: 6, turn: true }]).big).toBe(2);
   });
+
+  it('grid-point count: five 4 × 4 squares, turnable, need two 10 × 10 bins although their area fits one', () => {
+    // Five unit squares need a square of side 2 + 1/√2 ≈ 2.707 even when turned freely (Göbel 1979, in
+    // E. Friedman, "Packing Unit Squares in Squares", Electronic J. Combinatorics DS7; from memory), and
+    // 10 / 4 = 2.5 < 2.707, so one bin cannot hold them. L0 = ⌈80 / 100⌉ = 1; the count is
+    // ⌈5 / (⌊10/4⌋·⌊10/4⌋)⌉ = ⌈5 / 4⌉ = 2.
+    const items = Array.from({ length: 5 }, () => ({ w: 4, h: 4, turn: true }));
+    const b = binLowerBounds(10, 10, items);
+    expect(b.L0).toBe(1);
+    expect(b.count).toBe(2);
+    expect(b.best).toBe(2);
+    // Four fit (a 2 × 2 grid): the count gives 1 there, so it does not overstate.
+    expect(binLowerBounds(10, 10, items.slice(0, 4)).count).toBe(1);
+    // Turning does not help an item past the bound: its shorter side counts (4 × 9 items: ⌊10/4⌋² = 4 per bin).
+    expect(binLowerBounds(10, 10, Array.from({ length: 5 }, () => ({ w: 9, h: 4, turn: true }))).count).toBe(2);
+  });
+
+  it('grid-point count stays at or below what the engine packs (random jobs of large parts, kerf)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.record({ w: fc.integer({ min: 20, max: 60 }), h: fc.integer({ min: 20, max: 60 }), turn: fc.boolean() }), { minLength: 1, maxLength: 14 }),
+        (items) => {
+          const j = job({
+            kerf: 2,
+            mode: 'free',
+            timeLimitMs: 20,
+            stock: [{ id: 'bin', kind: 'sheet', width: 120, height: 90 }],
+            parts: items.map((it, i) => ({ id: `p${i}`, width: it.w, height: it.h, canRotate: it.turn })),
+          });
+          const layout = nestChecked(j);
+          expect(layout.stats.lowerBound).toBeLessThanOrEqual(layout.stats.sheetsUsed);
+          // The same bound computed here on kerf-grown sizes (bins.ts: usable = size + kerf).
+          const grown = items.map((it) => ({ w: it.w + 2, h: it.h + 2, turn: it.turn }));
+          expect(binLowerBounds(122, 92, grown).count).toBeLessThanOrEqual(layout.stats.sheetsUsed);
+        },
+      ),
+      { numRuns: 40, seed: 11 },
+    );
+  });
 });
