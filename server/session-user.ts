@@ -5,6 +5,8 @@ export interface SessionUser {
   id: number;
   email: string;
   units: UnitSystem;
+  /** The account's session version when this was read (server only; never sent to the client). */
+  sessionVersion: number;
 }
 
 declare global {

@@ -4,6 +4,7 @@ import { loginInput, preferencesInput, signupInput } from '../../../shared/schem
 import { AppError } from '../../errors.js';
 import { requireUser, userOf } from '../../middleware/auth.js';
 import type { SessionUser } from '../../session-user.js';
+import { logIn } from './auth.passport.js';
 import type { AuthService } from './auth.service.js';
 import { loginLimiter, signupLimiter, type RateLimitOptions } from './rate-limit.js';
 
@@ -25,11 +26,6 @@ function authenticate(passport: PassportInstance, req: Request, res: Response, n
       else resolve(user || null);
     })(req, res, next);
   });
-}
-
-/** Starts a session (passport regenerates the session id first, against session fixation). */
-function logIn(req: Request, user: SessionUser): Promise<void> {
-  return new Promise((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
 }
 
 export function authRoutes(deps: AuthRoutesDeps): Router {

@@ -1,5 +1,5 @@
-import { UniqueConstraintViolationException, type EntityManager } from '@mikro-orm/sqlite';
-import type { MeDto, SignupInput, UnitSystem } from '../../../shared/schemas/api.schema.js';
+import { raw, UniqueConstraintViolationException, type EntityManager } from '@mikro-orm/sqlite';
+import type { MeDto, SignupInput, UnitSystem, UserDto } from '../../../shared/schemas/api.schema.js';
 import { AppError } from '../../errors.js';
 import type { SessionUser } from '../../session-user.js';
 import { Membership } from '../workshops/membership.entity.js';
@@ -10,7 +10,23 @@ import { User } from './user.entity.js';
 const EMAIL_TAKEN = { email: 'an account with this e-mail already exists; sign in instead' };
 
 function toSessionUser(user: User): SessionUser {
+  return { id: user.id, email: user.email, units: user.units, sessionVersion: user.sessionVersion };
+}
+
+function toUserDto(user: User): UserDto {
   return { id: user.id, email: user.email, units: user.units };
+}
+
+/**
+ * Sets an account's password hash and bumps its session version in one UPDATE, so every session signed in
+ * before stops working (auth.passport.ts). Run it in the caller's transaction; returns the new version, which
+ * the session making the change (if any) is signed in again with.
+ */
+export async function setPasswordEndingSessions(em: EntityManager, userId: number, passwordHash: string): Promise<number> {
+  const changed = await em.nativeUpdate(User, { id: userId }, { passwordHash, sessionVersion: raw('session_version + 1') });
+  if (changed !== 1) throw AppError.notFound('That account no longer exists.');
+  const row = await em.findOneOrFail(User, { id: userId }, { fields: ['sessionVersion'], refresh: true });
+  return row.sessionVersion;
 }
 
 /** Accounts: sign-up (a new workshop with the person as owner), credential checks, "me" and preferences. */
@@ -46,10 +62,14 @@ export class AuthService {
     return (await verifyPassword(user.passwordHash, password)) ? toSessionUser(user) : null;
   }
 
-  /** The user behind a session id, or null when the account no longer exists. */
-  async sessionUser(id: number): Promise<SessionUser | null> {
+  /**
+   * The user behind a session, or null when the account no longer exists or — when `version` is given — its
+   * password was set after the session signed in (the session's version is older than the account's).
+   */
+  async sessionUser(id: number, version?: number): Promise<SessionUser | null> {
     const user = await this.em.findOne(User, { id });
-    return user ? toSessionUser(user) : null;
+    if (!user || (version !== undefined && user.sessionVersion !== version)) return null;
+    return toSessionUser(user);
   }
 
   async me(userId: number): Promise<MeDto> {
@@ -60,7 +80,7 @@ export class AuthService {
       { populate: ['workshop'], orderBy: { workshop: { name: 'asc', id: 'asc' } } },
     );
     return {
-      user: toSessionUser(user),
+      user: toUserDto(user),
       memberships: memberships.map((m) => ({ workshopId: m.workshop.id, workshopName: m.workshop.name, role: m.role })),
     };
   }

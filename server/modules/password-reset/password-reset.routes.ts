@@ -1,6 +1,7 @@
 import { Router, type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import { ERROR_CODES, type ErrorBody } from '../../../shared/errors.js';
+import { logIn } from '../auth/auth.passport.js';
 import { RESET_REQUEST_ANSWER, type PasswordResetService } from './password-reset.service.js';
 
 export interface ResetLimit {
@@ -40,7 +41,9 @@ export function passwordResetRoutes(resets: PasswordResetService, limit: ResetLi
   });
   router.post('/:token', async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
-    await resets.reset(String(req.params.token), req.body);
+    const { userId, sessionVersion } = await resets.reset(String(req.params.token), req.body);
+    // Every other session of the account has ended; one signed in as it here stays signed in (new session id).
+    if (req.user?.id === userId) await logIn(req, { ...req.user, sessionVersion });
     res.status(204).end();
   });
   return router;

@@ -4,6 +4,7 @@ import { AppError } from '../../errors.js';
 import { linkTo, type PublicUrl } from '../../mail/links.js';
 import { HOUR_MS, hashLinkToken, isLinkTokenShape, newLinkToken } from '../../mail/tokens.js';
 import type { Logger } from '../../middleware/error-handler.js';
+import { setPasswordEndingSessions } from '../auth/auth.service.js';
 import { hashPassword } from '../auth/password.js';
 import { User } from '../auth/user.entity.js';
 import type { MailService } from '../mail/mail.service.js';
@@ -63,17 +64,22 @@ export class PasswordResetService {
     return { email: user.email };
   }
 
-  /** Sets the new password and uses up the link (and every other open link of the account) in one transaction. */
-  async reset(token: string, input: unknown): Promise<void> {
+  /**
+   * Sets the new password, uses up the link (and every other open link of the account) and ends every session
+   * of the account, in one transaction. Returns the account and its new session version, so a session of that
+   * account making the change can be signed in again.
+   */
+  async reset(token: string, input: unknown): Promise<{ userId: number; sessionVersion: number }> {
     const { password } = passwordResetInput.parse(input);
     const passwordHash = await hashPassword(password);
-    await this.em.fork({ clear: true }).transactional(async (em) => {
+    return this.em.fork({ clear: true }).transactional(async (em) => {
       const row = await this.usable(em, token);
       const now = this.now();
       const used = await em.nativeUpdate(PasswordResetToken, { id: row.id, usedAt: null }, { usedAt: now });
       if (used !== 1) throw GONE('This link has already been used.');
       await em.nativeUpdate(PasswordResetToken, { user: row.user.id, usedAt: null }, { usedAt: now });
-      await em.nativeUpdate(User, { id: row.user.id }, { passwordHash });
+      const sessionVersion = await setPasswordEndingSessions(em, row.user.id, passwordHash);
+      return { userId: row.user.id, sessionVersion };
     });
   }
 
