@@ -299,6 +299,7 @@ const FLOOR_CASES: Case[] = [
   },
   { name: 'GET stock history', method: 'get', prepare: async () => ({ path: `/api/workshops/${workshopId}/history/stock/${(await freshStock()).id}` }), expected: stockReaders(200) },
   { name: 'GET design history', method: 'get', prepare: async () => ({ path: `/api/workshops/${workshopId}/history/design/${(await freshDesign()).id}` }), expected: members(200) },
+  { name: 'GET build history', method: 'get', prepare: async () => ({ path: `/api/workshops/${workshopId}/history/build/${await demoBuildId(t, workshopId)}` }), expected: members(200) },
   { name: 'GET sent mail', method: 'get', prepare: async () => ({ path: `/api/workshops/${workshopId}/mail` }), expected: owners(200) },
   { name: 'GET invitations', method: 'get', prepare: async () => ({ path: `/api/workshops/${workshopId}/invitations` }), expected: owners(200) },
   {

@@ -5,7 +5,14 @@ import { accessOf, idParam, requireRole, requireUser, type RoleLookup } from '..
 import type { AuditService } from './audit.service.js';
 
 /** Who may read the history of each kind of item: whoever may read the item. */
-const READ: Record<string, Permission> = { design: 'readDesigns', plan: 'readDesigns', build: 'readDesigns', stock: 'readStock' };
+const READ: Record<string, Permission> = {
+  design: 'readDesigns',
+  plan: 'readDesigns',
+  build: 'readDesigns',
+  stock: 'readStock',
+  /** A file sent without a build (API only); files of a build are in the build's history. */
+  upload: 'readDesigns',
+};
 
 /** `/api/workshops/:wid/history/:subjectType/:id` — the "History" list of one item, newest first. */
 export function auditRoutes(audit: AuditService, lookup: RoleLookup): Router {

@@ -75,7 +75,7 @@ export function uploadRoutes(uploads: UploadsService, lookup: RoleLookup): Route
   });
 
   router.delete('/:id', write, async (req, res) => {
-    await uploads.remove(accessOf(res).workshopId, idParam(req, 'id'));
+    await uploads.remove(accessOf(res).workshopId, idParam(req, 'id'), userOf(req).email);
     res.status(204).end();
   });
   return router;

@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { DriverParamsDto, UploadDto, UploadKind } from '../../../shared/schemas/api.schema.js';
 import { AppError } from '../../errors.js';
+import { recordAudit } from '../audit/audit.service.js';
 import { Build } from '../builds/build.entity.js';
 import { newStorageKey, type FileStorage } from '../../storage/storage.js';
 import type { StockService } from '../stock/stock.service.js';
@@ -47,6 +48,27 @@ function toDto(u: Upload, workshopId: number): UploadDto {
   };
 }
 
+/** "12 kB", "3.4 MB" (1 kB = 1024 bytes, as the upload limits count). */
+export function formatFileSize(bytes: number): string {
+  return bytes < MB ? `${Math.max(1, Math.round(bytes / 1024))} kB` : `${(bytes / MB).toFixed(1)} MB`;
+}
+
+const KIND_WORDS: Record<UploadKind, string> = { photo: 'photo', 'drivers-csv': "drivers' parameters", 'stock-csv': 'stock CSV file' };
+
+/**
+ * Where an upload's history lives: the build it is attached to, else the upload itself (subject 'upload'; only
+ * files sent through the API without a build — the client always attaches them to a build).
+ */
+function auditSubject(u: Upload): { subjectType: string; subjectId: number } {
+  return u.subjectType && u.subjectId ? { subjectType: u.subjectType, subjectId: u.subjectId } : { subjectType: 'upload', subjectId: u.id };
+}
+
+function uploadSummary(u: Upload, drivers: number | null, imported: number | undefined): string {
+  const extra =
+    drivers !== null ? `${drivers} driver${drivers === 1 ? '' : 's'}, ` : imported !== undefined ? `${imported} row${imported === 1 ? '' : 's'} imported, ` : '';
+  return `Added ${KIND_WORDS[u.kind]} "${u.originalName}" (${extra}${formatFileSize(u.sizeBytes)})`;
+}
+
 const unsupported = (reason: string) => new AppError(415, 'unsupported_file', `The file was not accepted: ${reason}.`, { file: reason });
 
 /** Uploads of a workshop: checked by content, stored through the FileStorage, recorded in `uploads`. */
@@ -89,21 +111,25 @@ export class UploadsService {
     const key = newStorageKey(kind, sniffed.extension);
     await this.storage.put(key, file.buffer);
     try {
-      const em = this.em.fork();
-      const upload = em.create(Upload, {
-        workshop: workshopId,
-        kind,
-        subjectType: subject?.type ?? null,
-        subjectId: subject?.id ?? null,
-        originalName: cleanFileName(file.originalname, `${kind}.${sniffed.extension}`),
-        storageKey: key,
-        contentType: sniffed.contentType,
-        sizeBytes: file.buffer.length,
-        sha256: createHash('sha256').update(file.buffer).digest('hex'),
-        parsed,
-        uploadedBy: byEmail,
+      // The row and its history entry in one transaction (the entry may need the new row's id).
+      const upload = await this.em.fork().transactional(async (em) => {
+        const row = em.create(Upload, {
+          workshop: workshopId,
+          kind,
+          subjectType: subject?.type ?? null,
+          subjectId: subject?.id ?? null,
+          originalName: cleanFileName(file.originalname, `${kind}.${sniffed.extension}`),
+          storageKey: key,
+          contentType: sniffed.contentType,
+          sizeBytes: file.buffer.length,
+          sha256: createHash('sha256').update(file.buffer).digest('hex'),
+          parsed,
+          uploadedBy: byEmail,
+        });
+        await em.flush();
+        recordAudit(em, { workshopId, ...auditSubject(row), action: 'upload', summary: uploadSummary(row, parsed ? parsed.length : null, imported), actorEmail: byEmail });
+        return row;
       });
-      await em.flush();
       return { ...toDto(upload, workshopId), ...(imported !== undefined ? { imported } : {}), ...(parsed ? { drivers: parsed } : {}) };
     } catch (err) {
       await this.storage.delete(key);
@@ -131,9 +157,11 @@ export class UploadsService {
     return { upload: toDto(upload, workshopId), data };
   }
 
-  async remove(workshopId: number, id: number): Promise<void> {
+  /** Deletes the record and its history entry in one flush, then the bytes. */
+  async remove(workshopId: number, id: number, byEmail: string): Promise<void> {
     const upload = await this.em.findOneOrFail(Upload, { id, workshop: workshopId });
     const key = upload.storageKey;
+    recordAudit(this.em, { workshopId, ...auditSubject(upload), action: 'delete-upload', summary: `Removed ${KIND_WORDS[upload.kind]} "${upload.originalName}"`, actorEmail: byEmail });
     this.em.remove(upload);
     await this.em.flush();
     await this.storage.delete(key);
