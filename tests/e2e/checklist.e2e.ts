@@ -100,6 +100,13 @@ const tests: E2ETest[] = [
       await page.getByText(/SVG or other markup/).waitFor();
       await page.getByRole('img', { name: 'bench.png' }).scrollIntoViewIfNeeded();
       await ctx.screenshot('checklist-files');
+
+      // The build's page shows the photo in the build's history, with who added it.
+      const builds = (await (await maker.get(`/api/workshops/${workshopId}/builds`)).json()).items as { id: number; name: string }[];
+      await page.goto(`${ctx.baseUrl}/w/${workshopId}/builds/${builds.find((b) => b.name === BUILD)!.id}`);
+      const added = page.getByRole('list', { name: 'History' }).getByRole('listitem').filter({ hasText: 'Added photo "bench.png"' }).first();
+      await added.waitFor();
+      expect((await added.innerText()).includes(DEMO.maker), `the history line names who added the photo: ${await added.innerText()}`);
     },
   },
   {

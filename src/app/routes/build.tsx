@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useCallback, useState } from 'react';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { can } from '../../../shared/schemas/api.schema';
+import { HistoryList } from '../../components/history/history-list';
 import { PageHeader } from '../../components/layouts/app-layout';
 import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
@@ -114,6 +115,9 @@ export function BuildRoute() {
                 </li>
               ))}
             </ul>
+          </Card>
+          <Card title="History">
+            <HistoryList workshopId={workshopId} subjectType="build" subjectId={buildId} />
           </Card>
         </div>
       </div>

@@ -15,7 +15,7 @@ export const historyQueryOptions = (workshopId: number, subjectType: string, sub
     queryFn: () => api.get<ListDto<AuditEventDto>>(`/api/workshops/${workshopId}/history/${subjectType}/${subjectId}`).then((r) => r.items),
   });
 
-/** The "History" of one design, plan or stock item: who changed what, and when (newest first). */
+/** The "History" of one design, plan, build (its cut plans, photos and files) or stock item: who changed what, and when (newest first). */
 export function HistoryList({ workshopId, subjectType, subjectId, limit = 8 }: { workshopId: number; subjectType: 'design' | 'plan' | 'stock' | 'build'; subjectId: number; limit?: number }) {
   const history = useQuery(historyQueryOptions(workshopId, subjectType, subjectId));
   if (history.isPending) return <p className="text-sm text-zinc-500">Loading history…</p>;

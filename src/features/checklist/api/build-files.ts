@@ -1,5 +1,6 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { DriverParamsDto, ListDto, UploadDto } from '../../../../shared/schemas/api.schema';
+import { historyKeys } from '../../../components/history/history-list';
 import { uploadFile } from '../../../components/history/upload-file';
 import { api } from '../../../lib/api-client';
 
@@ -18,13 +19,21 @@ export function useBuildFiles(workshopId: number, buildId: number) {
   return useQuery(buildFilesQueryOptions(workshopId, buildId));
 }
 
+/** A file added or removed changes the list and the build's history (server: uploads.service.ts records it). */
+function invalidateFilesAndHistory(queryClient: QueryClient, workshopId: number, buildId: number) {
+  return Promise.all([
+    queryClient.invalidateQueries({ queryKey: buildFileKeys.list(workshopId, buildId) }),
+    queryClient.invalidateQueries({ queryKey: historyKeys.item(workshopId, 'build', buildId) }),
+  ]);
+}
+
 export function useUploadBuildFile(workshopId: number, buildId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ kind, file }: { kind: 'photo' | 'drivers-csv'; file: File }) =>
       uploadFile<UploadDto & { drivers?: DriverParamsDto[] }>(`/api/workshops/${workshopId}/uploads/${kind}?buildId=${buildId}`, file),
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: buildFileKeys.list(workshopId, buildId) }),
+    onSuccess: () => invalidateFilesAndHistory(queryClient, workshopId, buildId),
   });
 }
 
@@ -32,7 +41,7 @@ export function useDeleteBuildFile(workshopId: number, buildId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (id: number) => api.delete(`/api/workshops/${workshopId}/uploads/${id}`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: buildFileKeys.list(workshopId, buildId) }),
+    onSuccess: () => invalidateFilesAndHistory(queryClient, workshopId, buildId),
   });
 }
 
