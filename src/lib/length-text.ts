@@ -40,3 +40,12 @@ export function parseLengthInput(text: string, unit: LengthUnit): LengthTextResu
   if (!r.ok) return r;
   return { ok: true, mm: Math.round(r.mm * 10000) / 10000 };
 }
+
+/**
+ * `parseLengthInput` for a named box: a failure names the field the way the schema's messages do
+ * (`width: "twelve" is not a length: write for example …`). Used by the design form and the New design dialog.
+ */
+export function parseLengthField(text: string, unit: LengthUnit, fieldName: string): LengthTextResult {
+  const r = parseLengthInput(text, unit);
+  return r.ok ? r : { ok: false, message: `${fieldName}: ${r.message}` };
+}

@@ -7,6 +7,7 @@ import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { Spinner } from '../../components/ui/spinner';
 import { paths } from '../../config/paths';
+import { useMe } from '../../features/auth/api/get-me';
 import { designsQueryOptions, useDesigns } from '../../features/designs/api/get-designs';
 import { DesignsTable } from '../../features/designs/components/designs-table';
 import { NewDesignDialog } from '../../features/designs/components/new-design-dialog';
@@ -27,6 +28,7 @@ export function DesignsRoute() {
   const navigate = useNavigate();
   const [creating, setCreating] = useState(false);
   const canEdit = can(membership.role, 'editDesigns');
+  const units = useMe().data?.user.units ?? 'mm';
 
   return (
     <>
@@ -63,6 +65,7 @@ export function DesignsRoute() {
       {canEdit ? (
         <NewDesignDialog
           workshopId={workshopId}
+          units={units}
           open={creating}
           onClose={() => setCreating(false)}
           onCreated={(created) => {

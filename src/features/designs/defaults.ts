@@ -3,6 +3,7 @@
  * 18 mm MDF, 50 mm polyester lining on every face but the baffle with a 5 mm crush allowance.
  */
 import { AXES, FACE_COORDS, type Axis, type DesignInput, type Face } from '../../../shared/schemas/design.schema';
+import { MM_PER_INCH, type LengthUnit } from '../../../shared/units/index';
 
 export type BraceInput = NonNullable<DesignInput['braces']>[number];
 export type OpeningInput = NonNullable<DesignInput['openings']>[number];
@@ -18,6 +19,12 @@ export const DEFAULT_LINING: LiningInput = {
   minSliver: 20,
   portClearance: 5,
 };
+
+/** The New design dialog's starting size, round in the user's unit: 250 × 400 × 300 mm, or 10 × 16 × 12 in. */
+export function startingOuter(unit: LengthUnit): OuterInput {
+  if (unit === 'mm') return { width: 250, height: 400, depth: 300 };
+  return { width: 10 * MM_PER_INCH, height: 16 * MM_PER_INCH, depth: 12 * MM_PER_INCH };
+}
 
 export function newDesign(name: string, outer: OuterInput): DesignInput {
   return {

@@ -1,15 +1,13 @@
 import { Card } from '../../../components/ui/card';
 import { JoineryField } from './joinery-field';
-import { LengthField, NumField, TextField, useLengthUnit } from './fields';
+import { LengthField, lengthUnitHint, NumField, TextField, useLengthUnit } from './fields';
 
 const MATERIALS = ['MDF', 'Birch plywood', 'Plywood', 'Particleboard', 'HDF'];
 
 export function BoxSection({ readOnly }: { readOnly: boolean }) {
   const unit = useLengthUnit();
-  const lengths =
-    unit === 'in' ? 'Lengths in inches; type inches or millimetres (12 3/8, 12.375 in, 314.5 mm).' : 'Lengths in millimetres; type millimetres or inches (314.5, 12 3/8").';
   return (
-    <Card id="box" title="Box" description={`Outer size, sheet material and how the panels join. ${lengths}`}>
+    <Card id="box" title="Box" description={`Outer size, sheet material and how the panels join. ${lengthUnitHint(unit)}`}>
       <div className="space-y-5">
         <TextField name="name" label="Name" />
         <div>

@@ -7,7 +7,7 @@ import { get, useController, useFormContext, type Path, type RegisterOptions } f
 import type { DesignInput } from '../../../../shared/schemas/design.schema';
 import type { LengthUnit } from '../../../../shared/units/index';
 import { Field, Input, Select } from '../../../components/ui/field';
-import { formatLengthInput, parseLengthInput } from '../../../lib/length-text';
+import { formatLengthInput, parseLengthField } from '../../../lib/length-text';
 import { parseNumberField } from '../../../lib/number-input';
 
 /** The unit lengths are shown in (the user's mm/inch choice); every length box accepts either. */
@@ -15,6 +15,18 @@ export const LengthUnitContext = createContext<LengthUnit>('mm');
 export const useLengthUnit = () => useContext(LengthUnitContext);
 
 export type DesignPath = Path<DesignInput>;
+
+/** What the length boxes take, for a form's description: the shown unit, and that either unit may be typed. */
+export function lengthUnitHint(unit: LengthUnit): string {
+  return unit === 'in'
+    ? 'Lengths in inches; type inches or millimetres (12 3/8, 12.375 in, 314.5 mm).'
+    : 'Lengths in millimetres; type millimetres or inches (314.5, 12 3/8").';
+}
+
+/** How a message names a box: its label without the letter in brackets, in lower case (`Width (W)` → `width`). */
+export function fieldNameOf(label: ReactNode, name: string): string {
+  return typeof label === 'string' ? label.replace(/\s*\([^)]*\)$/, '').toLowerCase() : name;
+}
 
 function useFieldError(name: string): string | undefined {
   const {
@@ -72,7 +84,8 @@ export function NumField({
 /**
  * A length in the user's unit: `314.5` or `12 3/8`; typed as `12 3/8"`, `12.375 in`, `314.5 mm` or a bare
  * number in the shown unit. The form holds millimetres; text that is not a length holds NaN, so the form
- * cannot be saved while it shows, and the message says what to write.
+ * cannot be saved while it shows, and the message names the field and says what to write. Needs a
+ * react-hook-form `FormProvider` whose values have `name` (the design form, the New design dialog).
  */
 export function LengthField({
   name,
@@ -111,7 +124,7 @@ export function LengthField({
 
   const onText = (text: string) => {
     setDraft(text);
-    const r = parseLengthInput(text, unit);
+    const r = parseLengthField(text, unit, fieldNameOf(label, name));
     if (r.ok) {
       setParseError(null);
       field.onChange(r.mm);
