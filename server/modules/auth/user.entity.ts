@@ -10,9 +10,12 @@ export const User = defineEntity({
     email: p.string().length(254).unique(),
     passwordHash: p.string().length(255).hidden().lazy(true, false),
     units: p.enum([...UNIT_SYSTEMS]).default('mm'),
-    /** Bumped whenever the password is set; a session signed in with an older value is no longer valid. */
-    sessionVersion: p.integer().default(0),
     createdAt: p.datetime().onCreate(() => new Date()),
+    /**
+     * Bumped whenever the password is set; a session signed in with an older value is no longer valid.
+     * Last, as the migration adds the column (ALTER TABLE … ADD COLUMN appends).
+     */
+    sessionVersion: p.integer().default(0),
   },
 });
 export type User = InferEntity<typeof User>;
