@@ -280,6 +280,16 @@ function money(v: number, currency?: string): string {
   return `${v.toFixed(2)}${currency ? ` ${currency}` : ''}`;
 }
 
+/**
+ * How the sheet count stands against the lower bound, in plain words ("" when no bound is known):
+ * at the bound it is the fewest possible; above it, no layout can go under the bound.
+ */
+export function sheetsBoundText(sheetsUsed: number, lowerBound: number | undefined, prefix = ''): string {
+  if (lowerBound === undefined || lowerBound <= 0) return '';
+  if (sheetsUsed <= lowerBound) return `${prefix}the fewest possible`;
+  return `${prefix}no layout can use fewer than ${lowerBound}`;
+}
+
 /** Lines of the totals block. */
 export function totalsLines(t: MaterialTotals, currency?: string, parts: ReadonlyMap<string, CutPart> = new Map()): string[] {
   const lines: string[] = [];
@@ -289,7 +299,7 @@ export function totalsLines(t: MaterialTotals, currency?: string, parts: Readonl
     if (u.kind === 'roll') lines.push(`Roll "${u.stockId}"${what ? ` (${what})` : ''}, ${fmtMm(u.widthMm)} mm wide: ${(u.lengthMm / 1000).toFixed(2)} m — ${cost}`);
     else lines.push(`${u.kind === 'remnant' ? 'Remnant' : 'Sheet'} "${u.stockId}"${what ? ` (${what})` : ''}, ${fmtMm(u.widthMm)} × ${fmtMm(u.heightMm ?? 0)} mm: ${u.count} — ${cost}`);
   }
-  lines.push(`Sheets: ${t.sheetsUsed}${t.remnantsUsed ? ` (and ${t.remnantsUsed} remnant${t.remnantsUsed === 1 ? '' : 's'})` : ''} · roll length: ${(t.rollLengthMm / 1000).toFixed(2)} m`);
+  lines.push(`Sheets: ${t.sheetsUsed}${t.remnantsUsed ? ` (and ${t.remnantsUsed} remnant${t.remnantsUsed === 1 ? '' : 's'})` : ''}${sheetsBoundText(t.sheetsUsed, t.sheetsLowerBound, ' — ')} · roll length: ${(t.rollLengthMm / 1000).toFixed(2)} m`);
   lines.push(`Material cost: ${t.cost === null ? 'no prices given' : money(t.cost, currency)}${t.costIncomplete ? ' (some stock has no price)' : ''}`);
   if (t.liningMassKg !== undefined) lines.push(`Lining weight: ${t.liningMassKg.toFixed(2)} kg`);
   lines.push(`Parts placed: ${t.partsPlaced} · overall utilisation ${percent(t.utilisation)}`);

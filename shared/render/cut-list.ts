@@ -137,6 +137,22 @@ export interface MaterialTotals {
   /** Part area / stock area used, 0..1. */
   utilisation: number;
   liningMassKg?: number;
+  /**
+   * No layout of these parts can use fewer new sheets (the engine's lower bounds, summed over the
+   * panel groups). Only when every part is placed and the bound is known (the sheets objective).
+   */
+  sheetsLowerBound?: number;
+}
+
+/** Σ of the layouts' lower bounds, when it says something: every part placed and a bound known. */
+export function sheetsLowerBound(layouts: readonly Layout[]): number | undefined {
+  let lb = 0;
+  for (const l of layouts) {
+    if (l.unplaced.some((u) => u.quantity > 0)) return undefined;
+    if (l.sheets.some((s) => s.kind !== 'roll') && !(l.stats.lowerBound && l.stats.lowerBound > 0)) return undefined;
+    lb += l.stats.lowerBound ?? 0;
+  }
+  return lb > 0 ? lb : undefined;
 }
 
 export function placedArea(sheet: LayoutSheet): number {
@@ -187,5 +203,7 @@ export function materialTotals(layouts: readonly Layout[], stock: readonly Stock
     utilisation: stockArea > 0 ? partArea / stockArea : 0,
   };
   if (liningMassKg !== undefined) totals.liningMassKg = liningMassKg;
+  const lb = sheetsLowerBound(layouts);
+  if (lb !== undefined) totals.sheetsLowerBound = lb;
   return totals;
 }

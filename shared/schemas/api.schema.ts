@@ -372,6 +372,8 @@ export interface CutPlanTotalsDto {
   utilisation: number;
   /** Stock area used that is neither parts nor kept offcuts (m²). */
   wasteM2: number;
+  /** No layout can use fewer new sheets (absent: not known, or plans made before it was recorded). */
+  sheetsLowerBound?: number;
 }
 
 export interface CutPlanCabinetDto {

@@ -38,6 +38,9 @@ const tests: E2ETest[] = [
       expect(readings.some((r) => r > 0 && r < 100), `the progress bar should move between 0 and 100 %, read ${readings.join(', ')}`);
 
       await page.getByTestId('cut-plan-totals').waitFor();
+      // The sheet count against the engine's lower bound, in words.
+      const sheetsFigure = (await page.getByTestId('total-sheets').innerText()).replace(/\s+/g, ' ');
+      expect(/the fewest possible|no layout can use fewer than \d+/.test(sheetsFigure), `the sheets figure should say how it stands against the bound: ${sheetsFigure}`);
       const sheets = page.getByTestId('sheet-card');
       await sheets.first().waitFor();
       const count = await sheets.count();

@@ -104,6 +104,21 @@ describe('the demo build planned on the demo stock', () => {
     expect(plan.totals.wasteM2).toBeCloseTo((stockArea - partArea - offcutArea) / 1e6, 2);
   });
 
+  it('records the fewest sheets any layout could use: at least the continuous bound, at most what it used', () => {
+    // Continuous bound L0 = ⌈Σ part area / sheet area⌉ per material group (Martello & Vigo 1998, REFERENCES §10),
+    // with parts and the usable sheet grown by one kerf as the engine cuts them (kerf 3.2, trim 10).
+    const k = plan.settings.kerfMm;
+    let l0 = 0;
+    for (const g of plan.groups.filter((x) => x.kind === 'panels')) {
+      const stock = plan.stock.find((s) => g.stockIds.includes(s.id))!;
+      const usable = (stock.widthMm - 2 * stock.trimMm + k) * ((stock.heightMm ?? 0) - 2 * stock.trimMm + k);
+      const area = g.layout.sheets.reduce((a, s) => a + s.placements.reduce((b, p) => b + (p.width + k) * (p.height + k), 0), 0);
+      l0 += Math.ceil(area / usable - 1e-9);
+    }
+    expect(plan.totals.sheetsLowerBound).toBeGreaterThanOrEqual(l0);
+    expect(plan.totals.sheetsLowerBound).toBeLessThanOrEqual(plan.totals.sheetsUsed);
+  });
+
   it('is listed for its build, newest first, without the heavy parts', async () => {
     const second = await makeCutPlan(t, workshopId, buildId, { stockIds, timeLimitMs: 200, mode: 'free' });
     const list = await maker.get(`${plansPath()}?buildId=${buildId}`).expect(200);

@@ -337,5 +337,6 @@ export function planTotals(layouts: readonly Layout[], stock: readonly CutPlanSt
     partsUnplaced: t.partsUnplaced,
     utilisation: t.utilisation,
     wasteM2: Math.round(wasteMm2 / 1e4) / 100,
+    ...(t.sheetsLowerBound !== undefined ? { sheetsLowerBound: t.sheetsLowerBound } : {}),
   };
 }

@@ -1,4 +1,5 @@
 import type { CutPlanTotalsDto } from '../../../shared/schemas/api.schema';
+import { sheetsBoundText } from '../../../shared/render/cut-diagram';
 import { formatNumber } from '../../lib/format';
 
 function Figure({ label, value, detail, testId }: { label: string; value: string; detail?: string; testId?: string }) {
@@ -11,11 +12,16 @@ function Figure({ label, value, detail, testId }: { label: string; value: string
   );
 }
 
+function sheetsDetail(t: CutPlanTotalsDto): string | undefined {
+  const parts = [t.remnantsUsed ? `and ${t.remnantsUsed} remnant${t.remnantsUsed === 1 ? '' : 's'}` : '', sheetsBoundText(t.sheetsUsed, t.sheetsLowerBound)].filter(Boolean);
+  return parts.length ? parts.join(' · ') : undefined;
+}
+
 /** A cut plan's totals in six figures: sheets, lining, cost, lining weight, utilisation, parts. */
 export function PlanTotals({ totals: t }: { totals: CutPlanTotalsDto }) {
   return (
     <div className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-6" data-testid="cut-plan-totals">
-      <Figure label="Sheets" value={String(t.sheetsUsed)} detail={t.remnantsUsed ? `and ${t.remnantsUsed} remnant${t.remnantsUsed === 1 ? '' : 's'}` : undefined} testId="total-sheets" />
+      <Figure label="Sheets" value={String(t.sheetsUsed)} detail={sheetsDetail(t)} testId="total-sheets" />
       <Figure label="Lining roll" value={`${formatNumber(t.rollLengthMm / 1000, 2)} m`} />
       <Figure label="Material cost" value={t.cost === null ? '—' : t.cost.toFixed(2)} detail={t.cost === null ? 'no prices in the stock' : t.costIncomplete ? 'some stock has no price' : 'at stock prices'} />
       <Figure label="Lining weight" value={t.liningMassKg === null ? '—' : `${formatNumber(t.liningMassKg, 2)} kg`} />

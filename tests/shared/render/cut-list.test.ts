@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { cutPartsFromBuild, nestPartsFromCutParts, buildLiningMassKg } from '../../../shared/render/build.js';
+import { sheetsBoundText } from '../../../shared/render/cut-diagram.js';
 import { CUT_LIST_HEADER, cutListCsv, cutListRows, materialTotals, numberSheets } from '../../../shared/render/cut-list.js';
 import { exportFileName, slugify } from '../../../shared/render/file-names.js';
 import { nestJobSchema, type Layout } from '../../../shared/schemas/nest.schema.js';
@@ -91,6 +92,27 @@ describe('material totals', () => {
   it('say so when some stock has no price, and give no cost when none has', () => {
     expect(materialTotals([SMALL_LAYOUT], [SMALL_STOCK[0]!]).costIncomplete).toBe(true);
     expect(materialTotals([SMALL_LAYOUT]).cost).toBeNull();
+  });
+});
+
+describe('the fewest sheets possible', () => {
+  const withBound = (lowerBound: number | undefined, unplaced: Layout['unplaced'] = []): Layout => ({
+    ...SMALL_LAYOUT,
+    unplaced,
+    stats: { ...SMALL_LAYOUT.stats, ...(lowerBound !== undefined ? { lowerBound } : {}) },
+  });
+
+  it('adds up the layouts\' lower bounds and says where the count stands against it', () => {
+    expect(materialTotals([withBound(1), withBound(2)]).sheetsLowerBound).toBe(3);
+    expect(sheetsBoundText(3, 3)).toBe('the fewest possible');
+    expect(sheetsBoundText(4, 3)).toBe('no layout can use fewer than 3');
+  });
+
+  it('says nothing when the bound is unknown (cost objective, older plans) or parts were left over', () => {
+    expect(materialTotals([withBound(undefined)]).sheetsLowerBound).toBeUndefined();
+    expect(materialTotals([withBound(0)]).sheetsLowerBound).toBeUndefined();
+    expect(materialTotals([withBound(2, [{ partId: 'p1', quantity: 1 }])]).sheetsLowerBound).toBeUndefined();
+    expect(sheetsBoundText(3, undefined)).toBe('');
   });
 });
 
