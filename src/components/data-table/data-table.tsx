@@ -12,6 +12,7 @@ import {
   getFilteredRowModel,
   getSortedRowModel,
   useReactTable,
+  type ColumnDef,
   type Row,
   type SortingState,
   type Table,
@@ -48,6 +49,15 @@ export function useDataTable<T>({ data, columns, initialSorting = [], filterKey,
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),
   });
+}
+
+/** The last column: the row's buttons, right-aligned, under a header only screen readers read ("Actions"). */
+export function rowActionsColumn<T>(render: (item: T) => ReactNode): ColumnDef<T, unknown> {
+  return {
+    id: 'actions',
+    header: () => <span className="sr-only">Actions</span>,
+    cell: (info) => <div className="flex justify-end gap-1">{render(info.row.original)}</div>,
+  };
 }
 
 /** "12 designs", or "3 of 12 designs" while a filter hides some; read out when it changes. */

@@ -4,7 +4,7 @@ import { Link, useNavigate } from 'react-router-dom';
 import type { DesignSummaryDto } from '../../../../shared/schemas/api.schema';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDeleteDialog } from '../../../components/data-table/confirm-delete-dialog';
-import { DataTable, RowCount, useDataTable } from '../../../components/data-table/data-table';
+import { DataTable, rowActionsColumn, RowCount, useDataTable } from '../../../components/data-table/data-table';
 import { Input } from '../../../components/ui/field';
 import { formatDateTime, formatRelativeTime, formatSizeMm } from '../../../lib/format';
 import { notify } from '../../../lib/notify';
@@ -80,44 +80,32 @@ export function DesignsTable({
           );
         },
       }),
-      column.display({
-        id: 'actions',
-        header: () => <span className="sr-only">Actions</span>,
-        cell: (info) => {
-          const d = info.row.original;
-          return (
-            <div className="flex justify-end gap-1">
-              <Button size="sm" variant="ghost" onClick={() => navigate(designHref(d.id))}>
-                Open
+      rowActionsColumn<DesignSummaryDto>((d) => (
+        <>
+          <Button size="sm" variant="ghost" onClick={() => navigate(designHref(d.id))}>
+            Open
+          </Button>
+          {canEdit ? (
+            <>
+              <Button
+                size="sm"
+                variant="ghost"
+                busy={duplicate.isPending && duplicate.variables === d.id}
+                onClick={() =>
+                  duplicate.mutate(d.id, {
+                    onSuccess: (copy) => notify(`Made a copy: “${copy.name}”.`, 'success'),
+                  })
+                }
+              >
+                Duplicate
               </Button>
-              {canEdit ? (
-                <>
-                  <Button
-                    size="sm"
-                    variant="ghost"
-                    busy={duplicate.isPending && duplicate.variables === d.id}
-                    onClick={() =>
-                      duplicate.mutate(d.id, {
-                        onSuccess: (copy) => notify(`Made a copy: “${copy.name}”.`, 'success'),
-                      })
-                    }
-                  >
-                    Duplicate
-                  </Button>
-                  <Button
-                    size="sm"
-                    variant="ghost"
-                    className="text-red-700 hover:bg-red-50 hover:text-red-800"
-                    onClick={() => setDeleting(d)}
-                  >
-                    Delete
-                  </Button>
-                </>
-              ) : null}
-            </div>
-          );
-        },
-      }),
+              <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50 hover:text-red-800" onClick={() => setDeleting(d)}>
+                Delete
+              </Button>
+            </>
+          ) : null}
+        </>
+      )),
     ],
     [canEdit, designHref, duplicate, navigate],
   );

@@ -4,7 +4,7 @@ import type { StockItemDto, StockKind } from '../../../../shared/schemas/api.sch
 import { HistoryList } from '../../../components/history/history-list';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDeleteDialog } from '../../../components/data-table/confirm-delete-dialog';
-import { DataTable, RowCount, useDataTable } from '../../../components/data-table/data-table';
+import { DataTable, rowActionsColumn, RowCount, useDataTable } from '../../../components/data-table/data-table';
 import { Input } from '../../../components/ui/field';
 import { cn } from '../../../lib/cn';
 import { formatNumber, formatRelativeTime } from '../../../lib/format';
@@ -83,30 +83,23 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
           </span>
         ),
       }),
-      column.display({
-        id: 'actions',
-        header: () => <span className="sr-only">Actions</span>,
-        cell: (i) => {
-          const s = i.row.original;
-          return (
-            <div className="flex justify-end gap-1">
-              <Button size="sm" variant="ghost" aria-expanded={open === s.id} onClick={() => setOpen(open === s.id ? null : s.id)}>
-                History
+      rowActionsColumn<StockItemDto>((s) => (
+        <>
+          <Button size="sm" variant="ghost" aria-expanded={open === s.id} onClick={() => setOpen(open === s.id ? null : s.id)}>
+            History
+          </Button>
+          {canManage ? (
+            <>
+              <Button size="sm" variant="ghost" onClick={() => onEdit(s)}>
+                Edit
               </Button>
-              {canManage ? (
-                <>
-                  <Button size="sm" variant="ghost" onClick={() => onEdit(s)}>
-                    Edit
-                  </Button>
-                  <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50" onClick={() => setDeleting(s)}>
-                    Delete
-                  </Button>
-                </>
-              ) : null}
-            </div>
-          );
-        },
-      }),
+              <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50" onClick={() => setDeleting(s)}>
+                Delete
+              </Button>
+            </>
+          ) : null}
+        </>
+      )),
     ],
     [canManage, onEdit, open],
   );
