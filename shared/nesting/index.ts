@@ -85,9 +85,23 @@ function sheetLowerBound(pr: Problem): number {
     return o & ORIENT_TURNED && o !== ORIENT_TURNED ? { w: it.w, h: it.h, turn: true } : o === ORIENT_TURNED ? { w: it.h, h: it.w, turn: false } : { w: it.w, h: it.h, turn: false };
   });
   let remnants = 0;
-  for (const t of pr.types) if (t.kind === 'remnant') remnants += t.available;
+  let remnantArea = 0;
+  const remnantTypes: number[] = [];
+  pr.types.forEach((t, i) => {
+    if (t.kind !== 'remnant') return;
+    remnants += t.available;
+    remnantArea += t.available * t.W * t.H;
+    remnantTypes.push(i);
+  });
   const lb = binLowerBounds(W, H, items).best;
-  return Math.max(0, lb - remnants);
+  if (remnants === 0) return lb;
+  // With remnants (smaller, free): every bound on the whole less one bin a remnant; the parts no
+  // remnant can take, on their own; and the area the remnants cannot hold.
+  const sheetOnly = items.filter((_, i) => remnantTypes.every((t) => pr.orient[t]![i]! === 0));
+  let area = 0;
+  for (const it of pr.items) area += it.area;
+  const byArea = Math.ceil((area - remnantArea) / (W * H) - 1e-9);
+  return Math.max(0, lb - remnants, binLowerBounds(W, H, sheetOnly).best, byArea);
 }
 
 interface Solved {

@@ -105,6 +105,26 @@ describe('nest: layouts (each one checked by the independent validator)', () => 
     expect(l.sheets.map((s) => s.stockId)).toEqual(['rem']);
   });
 
+  it('with a remnant, parts too big for it still count toward the new sheets that must be bought', () => {
+    // A 1300 × 700 part is longer than half a 2440 × 1220 sheet (1300 > 1220) and wider than half of it
+    // (700 > 610), so no two share a sheet: the big-item count (Martello & Vigo 1998, REFERENCES §10) is 3.
+    // None fits the 800 × 600 remnant, so the remnant cannot stand in for one of those sheets.
+    const l = nestChecked(
+      job({
+        kerf: 0,
+        mode: 'free',
+        timeLimitMs: 100,
+        stock: [
+          { id: 'sheet', kind: 'sheet', width: 2440, height: 1220 },
+          { id: 'rem', kind: 'remnant', width: 800, height: 600, quantity: 1 },
+        ],
+        parts: [{ id: 'big', width: 1300, height: 700, quantity: 3, canRotate: false }, { id: 'small', width: 300, height: 250, quantity: 2 }],
+      }),
+    );
+    expect(l.stats.lowerBound).toBe(3);
+    expect(l.sheets.filter((s) => s.kind !== 'remnant')).toHaveLength(3);
+  });
+
   it('limited stock: quantities are respected and what does not fit is reported unplaced', () => {
     const l = nestChecked(job({ kerf: 0, mode: 'free', timeLimitMs: 100, stock: [{ id: 's', kind: 'sheet', width: 1000, height: 1000, quantity: 1 }], parts: [{ id: 'p', width: 600, height: 600, quantity: 3 }] }));
     expect(l.stats.sheetsUsed).toBe(1);
