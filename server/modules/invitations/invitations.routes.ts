@@ -1,7 +1,8 @@
-import { Router, type Request } from 'express';
+import { Router } from 'express';
 import { invitationAcceptInput, invitationInput } from '../../../shared/schemas/api.schema.js';
 import { accessOf, idParam, requireRole, requireUser, userOf, type RoleLookup } from '../../middleware/auth.js';
 import type { SessionUser } from '../../session-user.js';
+import { logIn } from '../auth/auth.passport.js';
 import type { InvitationsService } from './invitations.service.js';
 
 /** `/api/workshops/:wid/invitations` — owners invite, list and withdraw. */
@@ -21,11 +22,6 @@ export function invitationAdminRoutes(invitations: InvitationsService, lookup: R
     res.status(204).end();
   });
   return router;
-}
-
-/** Starts a session for the user (passport regenerates the session id first). */
-function logIn(req: Request, user: SessionUser): Promise<void> {
-  return new Promise((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
 }
 
 /**
