@@ -332,7 +332,9 @@ export function planTotals(layouts: readonly Layout[], stock: readonly CutPlanSt
     rollLengthMm: t.rollLengthMm,
     cost: t.cost === null ? null : Math.round(t.cost * 100) / 100,
     costIncomplete: t.costIncomplete,
-    liningMassKg: liningMassKg === null ? null : Math.round(liningMassKg * 1000) / 1000,
+    // Kept to 10 mg: rounding to grams here and to 10 g on the page would round twice (2.7349 → 2.735 →
+    // 2.74) where the printout, rounding once, says 2.73.
+    liningMassKg: liningMassKg === null ? null : Math.round(liningMassKg * 1e5) / 1e5,
     partsPlaced: t.partsPlaced,
     partsUnplaced: t.partsUnplaced,
     utilisation: t.utilisation,
