@@ -19,6 +19,8 @@ import { exportRoutes } from './modules/exports/exports.routes.js';
 import { nestJobRoutes } from './modules/nest-jobs/nest-jobs.routes.js';
 import { NestJobsService } from './modules/nest-jobs/nest-jobs.service.js';
 import { memberRoutes } from './modules/workshops/workshops.routes.js';
+import { workshopRoutes } from './modules/workshops/workshop-settings.routes.js';
+import { WorkshopSettingsService } from './modules/workshops/workshop-settings.service.js';
 import { WorkshopsService } from './modules/workshops/workshops.service.js';
 import { createNullMailer, type Mailer } from './mail/mailer.js';
 import type { PublicUrl } from './mail/links.js';
@@ -86,7 +88,9 @@ export function createApp(deps: AppDeps): Express {
   const publicUrl = deps.publicUrl ?? (() => 'http://localhost:3000');
   const stock = new StockService(orm.em);
   const audit = new AuditService(orm.em);
-  const uploads = new UploadsService(orm.em, deps.storage ?? new MemoryStorage(), stock);
+  const storage = deps.storage ?? new MemoryStorage();
+  const uploads = new UploadsService(orm.em, storage, stock);
+  const workshopSettings = new WorkshopSettingsService(orm.em, storage, logger);
   const invitations = new InvitationsService(orm.em, mail, publicUrl);
   const resets = new PasswordResetService(orm.em, mail, publicUrl, logger);
   const checklist = new ChecklistService(orm.em, stock);
@@ -119,6 +123,7 @@ export function createApp(deps: AppDeps): Express {
     authRoutes({ auth, passport, sessionCookieName: SESSION_COOKIE, loginLimit: deps.loginLimit, signupLimit: deps.signupLimit }),
   );
   api.use('/workshops/:wid/members', memberRoutes(workshops));
+  api.use('/workshops', workshopRoutes(workshopSettings, roleLookup));
   api.use('/workshops/:wid/designs', designRoutes(designs, roleLookup));
   api.use('/workshops/:wid/builds', buildRoutes(builds, roleLookup));
   api.use('/workshops/:wid/nest-jobs', nestJobRoutes(nestJobs, roleLookup));

@@ -5,6 +5,7 @@ import { Migration20261201222028 } from './Migration20261201222028.js';
 import { Migration20261201222500 } from './Migration20261201222500.js';
 import { Migration20261201223100 } from './Migration20261201223100.js';
 import { Migration20261202003000 } from './Migration20261202003000.js';
+import { Migration20261202010000 } from './Migration20261202010000.js';
 
 /**
  * Every migration, oldest first. `npm run orm -- migration:create` writes a new file here; add it to this list
@@ -17,4 +18,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201222500', class: Migration20261201222500 },
   { name: 'Migration20261201223100', class: Migration20261201223100 },
   { name: 'Migration20261202003000', class: Migration20261202003000 },
+  { name: 'Migration20261202010000', class: Migration20261202010000 },
 ];

@@ -405,6 +405,46 @@ export interface CutPlanDto extends CutPlanSummaryDto {
 
 export const EXPORT_PAPERS = ['A4', 'Letter', 'A3', 'Tabloid', 'roll'] as const;
 
+// ─── Workshop settings (PRODUCT.md §2: the owner's "workshop settings, deleting the workshop") ──────
+export const workshopNameSchema = z
+  .string({ error: 'name is required' })
+  .trim()
+  .min(1, 'name is required')
+  .max(120, 'name must be at most 120 characters');
+
+/** ISO 4217 codes a workshop may price its stock in; null = plain numbers. */
+export const CURRENCIES = ['EUR', 'GBP', 'USD', 'CAD', 'AUD', 'NZD', 'CHF', 'SEK', 'NOK', 'DKK', 'PLN', 'JPY'] as const;
+export type Currency = (typeof CURRENCIES)[number];
+export const currencySchema = z.enum(CURRENCIES, { error: `currency must be one of ${CURRENCIES.join(', ')}, or none` }).nullable();
+
+/** The settings that prefill "Make cut plan": the cut plan settings' own rules (one schema, not a copy). */
+export const cutDefaultsInput = cutPlanSettingsInput.pick({ kerfMm: true, trimMm: true, minOffcutMm: true, mode: true, timeLimitMs: true });
+export type CutDefaultsInput = z.input<typeof cutDefaultsInput>;
+export type CutDefaults = z.output<typeof cutDefaultsInput>;
+
+export const workshopCreateInput = z.object({ name: workshopNameSchema });
+/** `PATCH /workshops/:wid`: only the fields sent change; `cutDefaults` replaces the defaults whole (missing ones take the usual value). */
+export const workshopUpdateInput = z.object({
+  version: versionSchema,
+  name: workshopNameSchema.optional(),
+  currency: currencySchema.optional(),
+  cutDefaults: cutDefaultsInput.optional(),
+});
+export type WorkshopUpdateInput = z.input<typeof workshopUpdateInput>;
+export type WorkshopUpdateValues = z.output<typeof workshopUpdateInput>;
+/** `DELETE /workshops/:wid`: the owner types the workshop's name to confirm. */
+export const workshopDeleteInput = z.object({
+  confirmName: z.string({ error: "type the workshop's name to confirm" }).min(1, "type the workshop's name to confirm").max(200),
+});
+
+export interface WorkshopDto {
+  id: number;
+  name: string;
+  currency: Currency | null;
+  cutDefaults: CutDefaults;
+  version: number;
+}
+
 // ─── E-mail, invitations, password reset ────────────────────────────────────────────────────────
 export interface MailMessageDto {
   id: number;

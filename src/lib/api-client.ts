@@ -55,7 +55,8 @@ export interface ApiClient {
   post<T>(path: string, body?: unknown, init?: RequestOptions): Promise<T>;
   put<T>(path: string, body?: unknown, init?: RequestOptions): Promise<T>;
   patch<T>(path: string, body?: unknown, init?: RequestOptions): Promise<T>;
-  delete<T = void>(path: string, init?: RequestOptions): Promise<T>;
+  /** `body`: for the few deletes that carry one (deleting a workshop sends the typed name). */
+  delete<T = void>(path: string, init?: RequestOptions, body?: unknown): Promise<T>;
   /** Replace the 401 handler (the app sets it once the router exists). */
   setOnUnauthorized(handler: ((error: ApiError) => void) | undefined): void;
 }
@@ -156,7 +157,7 @@ export function createApiClient(clientOptions: ApiClientOptions = {}): ApiClient
     post: (path, body, init) => request('POST', path, body, init),
     put: (path, body, init) => request('PUT', path, body, init),
     patch: (path, body, init) => request('PATCH', path, body, init),
-    delete: (path, init) => request('DELETE', path, undefined, init),
+    delete: (path, init, body) => request('DELETE', path, body, init),
     setOnUnauthorized(handler) {
       onUnauthorized = handler;
     },

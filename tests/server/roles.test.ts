@@ -19,6 +19,7 @@ import { demoBuildId, DEMO_ROLL, DEMO_SHEET, finished, makeCutPlan, pollJob } fr
 import { buildTestApp, DEMO, signIn, signUp, type Agent, type TestApp } from './helpers.js';
 import { StockService } from '../../server/modules/stock/stock.service.js';
 import { StockItem } from '../../server/modules/stock/stock-item.entity.js';
+import { Workshop } from '../../server/modules/workshops/workshop.entity.js';
 
 type Who = 'owner' | 'designer' | 'maker' | 'viewer' | 'outsider' | 'signedOut';
 const WHO: Who[] = ['owner', 'designer', 'maker', 'viewer', 'outsider', 'signedOut'];
@@ -325,10 +326,61 @@ const FLOOR_CASES: Case[] = [
 ];
 CASES.push(...FLOOR_CASES);
 
+// ─── The workshop itself: start one, read, change and delete its settings ───
+/** A workshop of its own for one case, with the four demo people in their demo roles (the outsider is not in it). */
+async function freshWorkshop(): Promise<{ id: number; name: string; version: number }> {
+  const em = t.orm.em.fork();
+  const name = `Role check ${Math.random().toString(36).slice(2)}`;
+  const workshop = em.create(Workshop, { name });
+  for (const role of ['owner', 'designer', 'maker', 'viewer'] as const) {
+    em.create(Membership, { user: await em.findOneOrFail(User, { email: DEMO[role] }), workshop, role });
+  }
+  await em.flush();
+  return { id: workshop.id, name, version: workshop.version };
+}
+const workshopExists = async (id: number) => (await t.orm.em.fork().count(Workshop, { id })) === 1;
+
+const WORKSHOP_CASES: Case[] = [
+  {
+    name: 'POST workshop',
+    method: 'post',
+    prepare: async () => {
+      const name = `Started ${Math.random().toString(36).slice(2)}`;
+      return { path: '/api/workshops', body: { name }, check: async (status) => expect(await t.orm.em.fork().count(Workshop, { name })).toBe(status === 201 ? 1 : 0) };
+    },
+    // Anyone signed in starts a workshop of their own (the outsider too).
+    expected: all(201),
+  },
+  { name: 'GET workshop', method: 'get', prepare: async () => ({ path: `/api/workshops/${(await freshWorkshop()).id}` }), expected: members(200) },
+  {
+    name: 'PATCH workshop',
+    method: 'patch',
+    prepare: async () => {
+      const w = await freshWorkshop();
+      return {
+        path: `/api/workshops/${w.id}`,
+        body: { version: w.version, name: 'Renamed bench', currency: 'EUR' },
+        check: async (status) => expect((await t.orm.em.fork().findOneOrFail(Workshop, { id: w.id })).name).toBe(status === 200 ? 'Renamed bench' : w.name),
+      };
+    },
+    expected: owners(200),
+  },
+  {
+    name: 'DELETE workshop',
+    method: 'delete',
+    prepare: async () => {
+      const w = await freshWorkshop();
+      return { path: `/api/workshops/${w.id}`, body: { confirmName: w.name }, check: async (status) => expect(await workshopExists(w.id)).toBe(status !== 204) };
+    },
+    expected: owners(204),
+  },
+];
+CASES.push(...WORKSHOP_CASES);
+
 describe('role matrix', () => {
   it('covers every route of the API table in DEVELOPERS.md that needs a signed-in user', () => {
     // signup, login and health are open to anyone and have their own tests (auth.test.ts, errors.test.ts).
-    expect(CASES).toHaveLength(13 + 16 + FLOOR_CASES.length);
+    expect(CASES).toHaveLength(13 + 16 + FLOOR_CASES.length + WORKSHOP_CASES.length);
   });
 
   for (const c of CASES) {
