@@ -69,6 +69,7 @@ function diagramInput(src: CutPlanExportSource): CutDiagramInput {
     stock: stockInfo(src.stock),
     kerfMm: src.settings.kerfMm,
     ...(src.liningMassKg !== null ? { liningMassKg: src.liningMassKg } : {}),
+    ...(src.currency ? { currency: src.currency } : {}),
   };
 }
 

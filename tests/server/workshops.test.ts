@@ -3,6 +3,8 @@
  * starting one, reading and changing its settings with optimistic locking, and deleting it with everything it holds.
  * Statuses per RFC 9110 (201 §15.3.2, 204 §15.3.5, 400 §15.5.1, 403 §15.5.4, 409 §15.5.10).
  */
+import * as pdfjs from 'pdfjs-dist/legacy/build/pdf.mjs';
+import type request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_BOOKSHELF } from '../../shared/demo/designs.js';
 import { CURRENCIES, cutPlanSettingsInput, DEFAULT_KERF_MM } from '../../shared/schemas/api.schema.js';
@@ -156,6 +158,38 @@ describe('GET and PATCH /api/workshops/:wid', () => {
       const res = await agent.patch(`/api/workshops/${demoId}`).send({ version: 1, name: 'Taken over' }).expect(403);
       expect(res.body.error.code).toBe('forbidden');
     }
+  });
+});
+
+/** supertest: collect a binary body as a Buffer. */
+function binary(res: request.Response, cb: (err: Error | null, body: Buffer) => void): void {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+}
+
+/** Text of every page, read back with pdfjs-dist (a general-purpose PDF parser). */
+async function pdfText(bytes: Buffer): Promise<string> {
+  const doc = await pdfjs.getDocument({ data: new Uint8Array(bytes), disableFontFace: true, isEvalSupported: false, useSystemFonts: false, verbosity: 0 }).promise;
+  const pages: string[] = [];
+  for (let i = 1; i <= doc.numPages; i++) pages.push((await (await doc.getPage(i)).getTextContent()).items.map((it) => ('str' in it ? it.str : '')).join(' '));
+  return pages.join('\n');
+}
+
+describe('currency on the cut diagrams', () => {
+  it('the PDF totals carry the workshop’s currency code after the amounts once it is set', async () => {
+    const ws = await newWorkshop(owner, 'Priced Bench');
+    const base = `/api/workshops/${ws.id}`;
+    const design = await owner.post(`${base}/designs`).send({ ...DEMO_BOOKSHELF, name: 'Priced pair' }).expect(201);
+    const build = await owner.post(`${base}/builds`).send({ name: 'Priced build', items: [{ designId: design.body.id, quantity: 2 }] }).expect(201);
+    // Stock priced 42 per sheet and 6.50 per metre (cut-plans.helpers' demo stock).
+    const planId = await makeCutPlan(t, ws.id, build.body.id, { typedStock: [DEMO_SHEET, DEMO_ROLL], timeLimitMs: 200 }, DEMO.owner);
+    const pdf = async () => pdfText((await owner.get(`${base}/cut-plans/${planId}/exports/cut-diagrams.pdf`).buffer(true).parse(binary).expect(200)).body as Buffer);
+    const plain = await pdf();
+    expect(plain).toMatch(/Material cost: \d+\.\d\d(?! [A-Z]{3})/);
+    await owner.patch(base).send({ version: ws.version, currency: 'EUR' }).expect(200);
+    const priced = await pdf();
+    expect(priced).toMatch(/Material cost: \d+\.\d\d EUR/);
   });
 });
 

@@ -80,6 +80,8 @@ export interface CutPlanExportSource {
   layouts: Layout[];
   exportCabinets: BuildCabinet[];
   liningMassKg: number | null;
+  /** The workshop's currency (ISO 4217 code) shown after prices; null = plain numbers. */
+  currency: string | null;
 }
 
 /** Cut plans of one workshop. Plans are made by nest jobs (prepare → worker → save) and never edited. */
@@ -169,7 +171,7 @@ export class CutPlansService {
 
   /** The plan with its cabinets' plans, for the exports (also usable by share links, given the plan's workshop). */
   async exportSource(workshopId: number, id: number): Promise<CutPlanExportSource> {
-    const p = await this.em.findOneOrFail(CutPlan, { id, workshop: workshopId });
+    const p = await this.em.findOneOrFail(CutPlan, { id, workshop: workshopId }, { populate: ['workshop'] });
     return {
       id: p.id,
       buildName: p.buildName,
@@ -179,6 +181,7 @@ export class CutPlansService {
       layouts: p.groups.map((g) => g.layout),
       exportCabinets: p.exportCabinets,
       liningMassKg: p.totals.liningMassKg,
+      currency: p.workshop.currency ?? null,
     };
   }
 }
