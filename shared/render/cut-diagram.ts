@@ -276,7 +276,8 @@ function sheetPages(n: NumberedSheet, input: CutDiagramInput, parts: ReadonlyMap
   return pages;
 }
 
-function money(v: number, currency?: string): string {
+/** An amount to two decimals, with the workshop's ISO 4217 code after it when it has one (`42.00 EUR`). */
+export function money(v: number, currency?: string | null): string {
   return `${v.toFixed(2)}${currency ? ` ${currency}` : ''}`;
 }
 

@@ -167,6 +167,14 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                     return { loader: m.clientLoader(queryClient), Component: m.MembersRoute };
                   }),
                 },
+                {
+                  path: 'settings',
+                  errorElement: <RouteError />,
+                  lazy: page(async () => {
+                    const m = await import('./routes/workshop-settings');
+                    return { loader: m.clientLoader(queryClient), Component: m.WorkshopSettingsRoute };
+                  }),
+                },
               ],
             },
           ],

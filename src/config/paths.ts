@@ -15,6 +15,7 @@ export const paths = {
     getHref: (workshopId: number, designId: number) => `/w/${workshopId}/designs/${designId}`,
   },
   members: { path: '/w/:workshopId/members', getHref: (workshopId: number) => `/w/${workshopId}/members` },
+  workshopSettings: { path: '/w/:workshopId/settings', getHref: (workshopId: number) => `/w/${workshopId}/settings` },
   stock: { path: '/w/:workshopId/stock', getHref: (workshopId: number) => `/w/${workshopId}/stock` },
   invitations: { path: '/w/:workshopId/invitations', getHref: (workshopId: number) => `/w/${workshopId}/invitations` },
   sentMail: { path: '/w/:workshopId/sent-mail', getHref: (workshopId: number) => `/w/${workshopId}/sent-mail` },

@@ -176,15 +176,15 @@ const tests: E2ETest[] = [
       // PRODUCT.md §2 with can() of shared/schemas/api.schema.ts: viewers do not see the stock room; only owners
       // manage invitations and read the sent mail.
       const expected: Record<string, string[]> = {
-        [DEMO.owner]: ['Designs', 'Builds', 'Stock room', 'Checklists', 'Members', 'Invitations', 'Sent mail'],
+        [DEMO.owner]: ['Designs', 'Builds', 'Stock room', 'Checklists', 'Members', 'Settings', 'Invitations', 'Sent mail'],
         [DEMO.designer]: ['Designs', 'Builds', 'Stock room', 'Checklists', 'Members'],
         [DEMO.maker]: ['Designs', 'Builds', 'Stock room', 'Checklists', 'Members'],
         [DEMO.viewer]: ['Designs', 'Builds', 'Checklists', 'Members'],
       };
       const refused: Record<string, string[]> = {
-        [DEMO.designer]: ['invitations', 'sent-mail'],
-        [DEMO.maker]: ['invitations', 'sent-mail'],
-        [DEMO.viewer]: ['stock', 'invitations', 'sent-mail', 'cut-plans/1/share'],
+        [DEMO.designer]: ['invitations', 'sent-mail', 'settings'],
+        [DEMO.maker]: ['invitations', 'sent-mail', 'settings'],
+        [DEMO.viewer]: ['stock', 'invitations', 'sent-mail', 'settings', 'cut-plans/1/share'],
       };
       for (const [email, labels] of Object.entries(expected)) {
         const session = await ctx.newSession();
@@ -198,7 +198,7 @@ const tests: E2ETest[] = [
           await page.getByRole('heading', { name: 'No access' }).waitFor();
           expect((await page.title()) === 'No access · Boxwright', `${email} at ${path}: title "${await page.title()}"`);
           // Nothing of the page itself was drawn: no form to fill in that the server would refuse.
-          expect((await page.getByRole('button', { name: /Send invitation|Add item|Make a link/ }).count()) === 0, `${email} at ${path} sees a control`);
+          expect((await page.getByRole('button', { name: /Send invitation|Add item|Make a link|Save settings|Delete workshop/ }).count()) === 0, `${email} at ${path} sees a control`);
           await expectCalmText(page, `${email} at ${path}`);
         }
         if (email === DEMO.viewer) await ctx.screenshot('no-access-viewer-stock', page);
@@ -229,7 +229,7 @@ const tests: E2ETest[] = [
     async run(ctx) {
       const page = await ctx.page();
       await ctx.signIn(page, DEMO.owner);
-      for (const label of ['Designs', 'Builds', 'Stock room', 'Checklists', 'Members', 'Invitations', 'Sent mail']) {
+      for (const label of ['Designs', 'Builds', 'Stock room', 'Checklists', 'Members', 'Settings', 'Invitations', 'Sent mail']) {
         await page.getByRole('navigation', { name: 'Workshop' }).getByRole('link', { name: label }).click();
         await page.waitForFunction((t) => document.title === t, `${label} · ${WORKSHOP} · Boxwright`, { timeout: 10_000 });
         const current = page.getByRole('navigation', { name: 'Workshop' }).locator('[aria-current="page"]');

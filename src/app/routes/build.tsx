@@ -20,6 +20,7 @@ import { BuildLines } from '../../features/builds/components/build-lines';
 import { useCutPlans } from '../../features/cut-plans/api/get-cut-plans';
 import { MakeCutPlan } from '../../features/cut-plans/components/make-cut-plan';
 import { useDesigns } from '../../features/designs/api/get-designs';
+import { workshopQueryOptions, useWorkshopSettings } from '../../features/workshops/api/workshop-settings';
 import { parseId } from './params';
 import { useWorkshop, workshopTitle } from './workshop';
 
@@ -27,6 +28,8 @@ export const clientLoader =
   (queryClient: QueryClient) =>
   ({ params }: LoaderFunctionArgs) => {
     void queryClient.prefetchQuery(buildQueryOptions(parseId(params.workshopId), parseId(params.buildId)));
+    // Default cut settings and currency for "Make cut plan".
+    void queryClient.prefetchQuery(workshopQueryOptions(parseId(params.workshopId)));
     return null;
   };
 
@@ -38,6 +41,7 @@ export function BuildRoute() {
   const canEdit = can(membership.role, 'editDesigns');
   const canRun = can(membership.role, 'runCutPlans');
   const designs = useDesigns(workshopId);
+  const settings = useWorkshopSettings(workshopId);
   const remove = useDeleteBuild(workshopId);
   const navigate = useNavigate();
   const [editing, setEditing] = useState(false);
@@ -82,8 +86,18 @@ export function BuildRoute() {
       />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="space-y-6">
-          {canRun ? (
-            <MakeCutPlan workshopId={workshopId} buildId={buildId} canReadStock={can(membership.role, 'readStock')} onDone={openPlan} />
+          {canRun && settings.isPending ? (
+            <Spinner label="Loading the cut settings…" />
+          ) : canRun ? (
+            // The form starts from the workshop's defaults; if they cannot be read, from the usual ones.
+            <MakeCutPlan
+              workshopId={workshopId}
+              buildId={buildId}
+              canReadStock={can(membership.role, 'readStock')}
+              onDone={openPlan}
+              defaults={settings.data?.cutDefaults}
+              currency={settings.data?.currency}
+            />
           ) : (
             <Alert>Your role can read this build and its cut plans; makers, designers and owners make new cut plans.</Alert>
           )}

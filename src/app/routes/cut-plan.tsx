@@ -11,6 +11,7 @@ import { paths } from '../../config/paths';
 import { formatDateTime, formatNumber } from '../../lib/format';
 import { cutPlanQueryOptions, useCutPlan } from '../../features/cut-plans/api/get-cut-plans';
 import { CutPlanView } from '../../features/cut-plans/components/cut-plan-view';
+import { workshopQueryOptions, useWorkshopSettings } from '../../features/workshops/api/workshop-settings';
 import { parseId } from './params';
 import { useWorkshop, workshopTitle } from './workshop';
 
@@ -18,6 +19,7 @@ export const clientLoader =
   (queryClient: QueryClient) =>
   ({ params }: LoaderFunctionArgs) => {
     void queryClient.prefetchQuery(cutPlanQueryOptions(parseId(params.workshopId), parseId(params.planId)));
+    void queryClient.prefetchQuery(workshopQueryOptions(parseId(params.workshopId)));
     return null;
   };
 
@@ -25,6 +27,7 @@ export function CutPlanRoute() {
   const { workshopId, membership } = useWorkshop();
   const planId = parseId(useParams().planId);
   const plan = useCutPlan(workshopId, planId);
+  const currency = useWorkshopSettings(workshopId).data?.currency;
 
   if (plan.isPending)
     return (
@@ -62,7 +65,7 @@ export function CutPlanRoute() {
         }
         description={`${s.mode === 'guillotine' ? 'Guillotine cuts' : 'Free layout (CNC)'} · kerf ${formatNumber(s.kerfMm)} mm · edge trim ${formatNumber(s.trimMm)} mm · offcuts kept from ${formatNumber(s.minOffcutMm)} mm · made ${formatDateTime(p.createdAt)}${p.createdBy ? ` by ${p.createdBy}` : ''}`}
       />
-      <CutPlanView workshopId={workshopId} plan={p} />
+      <CutPlanView workshopId={workshopId} plan={p} currency={currency} />
       <Card title="History" className="mt-8 max-w-3xl">
         <HistoryList workshopId={workshopId} subjectType="plan" subjectId={p.id} />
       </Card>

@@ -10,6 +10,7 @@ import { stockCsvHref, stockQueryOptions, useStock } from '../../features/stock/
 import { ImportStockCsvDialog } from '../../features/stock/components/import-stock-csv';
 import { StockFormDialog } from '../../features/stock/components/stock-form';
 import { StockTable } from '../../features/stock/components/stock-table';
+import { workshopQueryOptions, useWorkshopSettings } from '../../features/workshops/api/workshop-settings';
 import { parseId } from './params';
 import { requirePermission, useWorkshop, workshopTitle } from './workshop';
 
@@ -19,6 +20,8 @@ export const clientLoader =
     // Viewers see plans, not the stock room.
     await requirePermission(queryClient, params, 'readStock');
     void queryClient.prefetchQuery(stockQueryOptions(parseId(params.workshopId)));
+    // The currency the prices are in.
+    void queryClient.prefetchQuery(workshopQueryOptions(parseId(params.workshopId)));
     return null;
   };
 
@@ -26,6 +29,7 @@ export function StockRoute() {
   const { workshopId, membership } = useWorkshop();
   const canManage = can(membership.role, 'manageStock');
   const stock = useStock(workshopId);
+  const currency = useWorkshopSettings(workshopId).data?.currency;
   const [editing, setEditing] = useState<StockItemDto | null | 'new'>(null);
   const [importing, setImporting] = useState(false);
   return (
@@ -52,7 +56,7 @@ export function StockRoute() {
       />
       {stock.isPending ? <Spinner label="Loading the stock room…" /> : null}
       {stock.isError ? <LoadError what="the stock room" error={stock.error} onRetry={() => stock.refetch()} /> : null}
-      {stock.data ? <StockTable workshopId={workshopId} items={stock.data} canManage={canManage} onEdit={setEditing} /> : null}
+      {stock.data ? <StockTable workshopId={workshopId} items={stock.data} canManage={canManage} onEdit={setEditing} currency={currency} /> : null}
       <p className="mt-4 max-w-3xl text-[13px] text-zinc-500">
         Full sheets are heavy and awkward (a 2440 × 1220 mm sheet of 18 mm MDF weighs about 40 kg): carry them with two people or a sheet
         trolley, and follow your local rules on manual handling.

@@ -56,7 +56,8 @@ export function WorkshopRoute() {
       homeHref={paths.designs.getHref(workshopId)}
       workshopName={membership.workshopName}
       roleLabel={ROLE_LABELS[membership.role]}
-      switchWorkshopHref={me.memberships.length > 1 ? paths.workshops.getHref() : undefined}
+      // Always: the picker is also where a new workshop is started.
+      switchWorkshopHref={paths.workshops.getHref()}
       nav={[
         { to: paths.designs.getHref(workshopId), label: 'Designs' },
         // A cut plan and its share page belong to builds; a plan's checklist to the checklists.
@@ -64,6 +65,7 @@ export function WorkshopRoute() {
         ...(can(membership.role, 'readStock') ? [{ to: paths.stock.getHref(workshopId), label: 'Stock room' }] : []),
         { to: paths.checklists.getHref(workshopId), label: 'Checklists', alsoFor: /\/cut-plans\/\d+\/checklist$/ },
         { to: paths.members.getHref(workshopId), label: 'Members' },
+        ...(can(membership.role, 'manageWorkshop') ? [{ to: paths.workshopSettings.getHref(workshopId), label: 'Settings' }] : []),
         ...(can(membership.role, 'manageMembers')
           ? [
               { to: paths.invitations.getHref(workshopId), label: 'Invitations' },

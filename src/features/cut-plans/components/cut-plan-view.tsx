@@ -6,10 +6,10 @@ import { Alert } from '../../../components/ui/alert';
 import { ExportsPanel } from './exports-panel';
 
 /** The whole cut plan: totals, warnings, exports, cautions, then every sheet and roll of every material. */
-export function CutPlanView({ workshopId, plan }: { workshopId: number; plan: CutPlanDto }) {
+export function CutPlanView({ workshopId, plan, currency }: { workshopId: number; plan: CutPlanDto; currency?: string | null }) {
   return (
     <div className="space-y-6">
-      <PlanTotals totals={plan.totals} />
+      <PlanTotals totals={plan.totals} currency={currency} />
 
       {plan.warnings.length > 0 ? (
         <Alert tone="warning" title={`${plan.warnings.length} warning${plan.warnings.length === 1 ? '' : 's'}`}>

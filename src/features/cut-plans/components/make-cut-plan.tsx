@@ -2,7 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useMemo, useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { cutPlanSettingsInput, DEFAULT_KERF_MM, type CutPlanSettingsInput, type StockInput, type StockItemDto } from '../../../../shared/schemas/api.schema';
+import { money } from '../../../../shared/render/cut-diagram';
+import { cutPlanSettingsInput, DEFAULT_KERF_MM, type CutDefaults, type CutPlanSettingsInput, type StockInput, type StockItemDto } from '../../../../shared/schemas/api.schema';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
@@ -38,17 +39,32 @@ function stockLabel(s: StockItemDto): string {
   return `${s.kind === 'roll' ? 'Roll' : s.kind === 'remnant' ? 'Remnant' : 'Sheet'} · ${s.material} ${formatNumber(s.thicknessMm)} mm · ${size}`;
 }
 
-function stockExtra(s: StockItemDto): string {
+function stockExtra(s: StockItemDto, currency?: string | null): string {
   const qty = s.quantity === null ? 'unlimited' : `${s.quantity} in stock`;
-  const cost = s.cost === null ? 'no price' : `${s.cost.toFixed(2)}${s.kind === 'roll' ? ' per m' : ' each'}`;
+  const cost = s.cost === null ? 'no price' : `${money(s.cost, currency)}${s.kind === 'roll' ? ' per m' : ' each'}`;
   return `${qty} · ${cost}${s.grain === 'length' ? ' · grain along the length' : ''}`;
 }
 
 /**
  * "Make cut plan": the stock (chosen from the stock room, or typed in when the room is empty or the
- * user prefers), the settings, then the server's nest job with a progress bar and Cancel.
+ * user prefers), the settings, then the server's nest job with a progress bar and Cancel. The settings start
+ * from the workshop's default cut settings (`defaults`, set by an owner) when given; prices show `currency`.
  */
-export function MakeCutPlan({ workshopId, buildId, canReadStock, onDone }: { workshopId: number; buildId: number; canReadStock: boolean; onDone: (cutPlanId: number) => void }) {
+export function MakeCutPlan({
+  workshopId,
+  buildId,
+  canReadStock,
+  onDone,
+  defaults,
+  currency,
+}: {
+  workshopId: number;
+  buildId: number;
+  canReadStock: boolean;
+  onDone: (cutPlanId: number) => void;
+  defaults?: CutDefaults;
+  currency?: string | null;
+}) {
   const room = useStockRoom(workshopId, canReadStock);
   const start = useStartNestJob(workshopId);
   const cancel = useCancelNestJob(workshopId);
@@ -68,7 +84,16 @@ export function MakeCutPlan({ workshopId, buildId, canReadStock, onDone }: { wor
     formState: { errors },
   } = useForm<FormInput>({
     resolver: zodResolver(formSchema),
-    defaultValues: { kerfMm: DEFAULT_KERF_MM, trimMm: 10, mode: 'guillotine', minOffcutMm: 200, objective: 'sheets', timeLimitS: 3, typed: false, typedStock: TYPED_DEFAULTS },
+    defaultValues: {
+      kerfMm: defaults?.kerfMm ?? DEFAULT_KERF_MM,
+      trimMm: defaults?.trimMm ?? 10,
+      mode: defaults?.mode ?? 'guillotine',
+      minOffcutMm: defaults?.minOffcutMm ?? 200,
+      objective: 'sheets',
+      timeLimitS: defaults ? defaults.timeLimitMs / 1000 : 3,
+      typed: false,
+      typedStock: TYPED_DEFAULTS,
+    },
   });
   const typedRows = useFieldArray({ control, name: 'typedStock' });
   const typed = watch('typed');
@@ -138,7 +163,7 @@ export function MakeCutPlan({ workshopId, buildId, canReadStock, onDone }: { wor
                       setChosen(next);
                     }}
                   />
-                  <span className="text-xs text-zinc-500">{stockExtra(s)}</span>
+                  <span className="text-xs text-zinc-500">{stockExtra(s, currency)}</span>
                 </li>
               ))}
             </ul>

@@ -1,5 +1,6 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
+import { money } from '../../../../shared/render/cut-diagram';
 import type { StockItemDto, StockKind } from '../../../../shared/schemas/api.schema';
 import { HistoryList } from '../../../components/history/history-list';
 import { Button } from '../../../components/ui/button';
@@ -31,7 +32,8 @@ function matches(s: StockItemDto, kind: StockKind | 'all', text: string): boolea
 }
 
 /** Sheets, remnants and rolls with sort and filter; edit, delete and history per row. */
-export function StockTable({ workshopId, items, canManage, onEdit }: { workshopId: number; items: StockItemDto[]; canManage: boolean; onEdit: (item: StockItemDto) => void }) {
+/** `currency`: the workshop's ISO 4217 code shown after prices (none: plain numbers). */
+export function StockTable({ workshopId, items, canManage, onEdit, currency }: { workshopId: number; items: StockItemDto[]; canManage: boolean; onEdit: (item: StockItemDto) => void; currency?: string | null }) {
   const [kind, setKind] = useState<StockKind | 'all'>('all');
   const [text, setText] = useState('');
   const [open, setOpen] = useState<number | null>(null);
@@ -67,7 +69,7 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
         header: 'Cost',
         meta: { numeric: true },
         cell: (i) => (
-          <span className="whitespace-nowrap">{i.row.original.cost === null ? '—' : `${i.row.original.cost.toFixed(2)}${i.row.original.kind === 'roll' ? ' /m' : ''}`}</span>
+          <span className="whitespace-nowrap">{i.row.original.cost === null ? '—' : `${money(i.row.original.cost, currency)}${i.row.original.kind === 'roll' ? ' /m' : ''}`}</span>
         ),
       }),
       column.accessor('grain', { header: 'Grain', meta: { className: 'hidden lg:table-cell' }, cell: (i) => (i.getValue() === 'length' ? 'Along the length' : 'None') }),
@@ -101,7 +103,7 @@ export function StockTable({ workshopId, items, canManage, onEdit }: { workshopI
         </>
       )),
     ],
-    [canManage, onEdit, open],
+    [canManage, onEdit, open, currency],
   );
 
   const table = useDataTable({ data: items, columns, filterKey: `${kind}|${text}`, matches: (s) => matches(s, kind, text) });

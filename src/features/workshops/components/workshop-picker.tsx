@@ -4,7 +4,7 @@ import { ROLE_LABELS } from '../../../lib/roles';
 
 export function WorkshopPicker({ memberships, hrefFor }: { memberships: MembershipDto[]; hrefFor: (workshopId: number) => string }) {
   if (memberships.length === 0) {
-    return <p className="text-sm text-zinc-600">You are not a member of any workshop yet. Ask a workshop owner to add you.</p>;
+    return <p className="text-sm text-zinc-600">You are not a member of any workshop yet. Ask a workshop owner to invite you, or start a new workshop below.</p>;
   }
   return (
     <ul className="divide-y divide-zinc-100 overflow-hidden rounded-lg border border-zinc-200">
