@@ -277,3 +277,25 @@ describe('DELETE /api/workshops/:wid', () => {
     expect((await countRows(demoId)).workshops).toBe(1);
   });
 });
+
+describe('DELETE /api/workshops/:wid when the file storage fails', () => {
+  it('the rows are gone all the same (the commit came first); the file left behind is logged, not a 500', async () => {
+    class StuckStorage extends MemoryStorage {
+      override async delete(): Promise<void> {
+        throw new Error('disk is read-only');
+      }
+    }
+    const stuck = new StuckStorage();
+    const t2 = await buildTestApp({ deps: { storage: stuck } });
+    try {
+      const { agent, workshopId } = await signUp(t2.app, 'closing@elsewhere.test', 'Short Lived');
+      await agent.post(`/api/workshops/${workshopId}/uploads/drivers-csv`).attach('file', Buffer.from(DRIVERS_CSV), 'drivers.csv').expect(201);
+      expect(stuck.size).toBe(1);
+      await agent.delete(`/api/workshops/${workshopId}`).send({ confirmName: 'Short Lived' }).expect(204);
+      expect(await t2.orm.em.fork().count(Workshop, { id: workshopId })).toBe(0);
+      expect(t2.logged.some((line) => line.includes('could not remove the stored file') && line.includes('disk is read-only'))).toBe(true);
+    } finally {
+      await t2.close();
+    }
+  });
+});
