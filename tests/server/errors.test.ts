@@ -17,7 +17,7 @@ describe('error shapes', () => {
   });
 
   it('an unknown /api route is a JSON 404, whatever the method', async () => {
-    for (const res of [await request(t.app).get('/api/nothing-here'), await request(t.app).post('/api/workshops').send({})]) {
+    for (const res of [await request(t.app).get('/api/nothing-here'), await request(t.app).post('/api/nothing-here').send({}), await request(t.app).delete('/api/workshops')]) {
       expect(res.status).toBe(404);
       expect(res.headers['content-type']).toMatch(/application\/json/);
       expect(res.body.error.code).toBe('not_found');
