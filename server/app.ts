@@ -90,7 +90,7 @@ export function createApp(deps: AppDeps): Express {
   const audit = new AuditService(orm.em);
   const storage = deps.storage ?? new MemoryStorage();
   const uploads = new UploadsService(orm.em, storage, stock);
-  const workshopSettings = new WorkshopSettingsService(orm.em, storage, logger);
+  const workshopSettings = new WorkshopSettingsService(orm.em, storage, logger, nestJobs);
   const invitations = new InvitationsService(orm.em, mail, publicUrl);
   const resets = new PasswordResetService(orm.em, mail, publicUrl, logger);
   const checklist = new ChecklistService(orm.em, stock);

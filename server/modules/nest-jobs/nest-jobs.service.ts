@@ -137,6 +137,20 @@ export class NestJobsService {
     return toDto(r);
   }
 
+  /**
+   * Cancels every queued or running job of one workshop (before the workshop is deleted, so none tries to save
+   * a plan into it); returns how many were cancelled. They read back as cancelled until forgotten.
+   */
+  cancelForWorkshop(workshopId: number): number {
+    let n = 0;
+    for (const r of this.jobs.values()) {
+      if (r.workshopId !== workshopId || FINISHED.has(r.status)) continue;
+      this.cancel(workshopId, r.id);
+      n++;
+    }
+    return n;
+  }
+
   /** Running or queued jobs (for shutdown and tests). */
   activeCount(): number {
     return [...this.jobs.values()].filter((j) => !FINISHED.has(j.status)).length;

@@ -55,6 +55,11 @@ function changeSummary(before: WorkshopDto, after: WorkshopDto): string[] {
   return parts;
 }
 
+/** What the delete needs of the nest jobs (NestJobsService). */
+export interface WorkshopJobs {
+  cancelForWorkshop(workshopId: number): number;
+}
+
 /**
  * The workshop itself (PRODUCT.md §2): any signed-in person starts one and owns it; its owners rename it,
  * set its currency and default cut settings, and delete it with everything it holds.
@@ -64,6 +69,8 @@ export class WorkshopSettingsService {
     private readonly em: EntityManager,
     private readonly storage: FileStorage,
     private readonly logger: Pick<Logger, 'error'> = console,
+    /** The nest jobs (in memory): a workshop's unfinished jobs are cancelled before it is deleted. */
+    private readonly jobs: WorkshopJobs = { cancelForWorkshop: () => 0 },
   ) {}
 
   /** A new workshop with the user as its only owner. */
@@ -97,9 +104,10 @@ export class WorkshopSettingsService {
   }
 
   /**
-   * Deletes the workshop and every row it owns in one transaction, once `confirmName` matches its name; the
-   * uploaded files are removed from storage after the commit (a failed removal leaves an orphan file, logged,
-   * never a row pointing at nothing). Members keep their accounts and their other workshops.
+   * Deletes the workshop and every row it owns in one transaction, once `confirmName` matches its name. Its
+   * unfinished nest jobs are cancelled first; the uploaded files are removed from storage after the commit (a
+   * failed removal leaves an orphan file, logged, never a row pointing at nothing). Members keep their accounts
+   * and their other workshops.
    */
   async remove(workshopId: number, confirmName: string): Promise<void> {
     const keys = await this.em.fork({ clear: true }).transactional(async (em) => {
@@ -108,6 +116,10 @@ export class WorkshopSettingsService {
         const message = `Type the workshop's name exactly as it is ("${workshop.name}") to delete it.`;
         throw AppError.invalid(message, { confirmName: "this is not the workshop's name" });
       }
+      // Its queued and running nest jobs are cancelled first, so none saves a plan into it (a job already saving
+      // either commits before this transaction, and its plan is deleted with the rest, or fails on the foreign
+      // key after it, quietly, being cancelled). Should the delete then fail, those jobs stay cancelled.
+      this.jobs.cancelForWorkshop(workshopId);
       const uploads = await em.find(Upload, { workshop: workshopId }, { fields: ['storageKey'] });
       // By entity name: the tables' types differ, their `workshop` reference is the same.
       for (const table of WORKSHOP_TABLES) await em.nativeDelete<{ workshop: number }>(table.meta.className, { workshop: workshopId });
