@@ -614,4 +614,6 @@ export interface SharedPlanDto {
   warnings: { code: string; message: string }[];
   /** Export file names under /api/share/:token/exports/. */
   exports: string[];
+  /** The workshop's currency (ISO 4217 code, shown after amounts as members see them), or null when none is set. */
+  currency: Currency | null;
 }

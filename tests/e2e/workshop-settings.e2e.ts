@@ -59,6 +59,16 @@ const tests: E2ETest[] = [
       expect(settingsLine > 0, 'the cut plan was made with the 2.4 mm kerf');
       await ctx.screenshot('cut-plan-currency');
 
+      // Someone without an account opening a shared link sees the same amount, code included.
+      const planId = Number(/\/cut-plans\/(\d+)$/.exec(page.url())?.[1]);
+      const ownerApi = await ctx.api(DEMO.owner);
+      const link = await (await ownerApi.post(`/api/workshops/${wid}/cut-plans/${planId}/share-links`, { data: { days: 1 } })).json();
+      const visitor = await (await ctx.newSession()).page();
+      await visitor.goto(link.url.replace(/^https?:\/\/[^/]+/, ctx.baseUrl));
+      const sharedCost = (await visitor.getByTestId('total-cost').innerText()).replace(/\s+/g, ' ');
+      expect(sharedCost === cost, `the shared page shows the cost as members see it: ${sharedCost} vs ${cost}`);
+      await ctx.screenshot('shared-plan-currency', visitor);
+
       // The stock room shows the code after its prices.
       await page.getByRole('navigation', { name: 'Workshop' }).getByRole('link', { name: 'Stock room' }).click();
       await page.getByText('38.50 EUR').first().waitFor();

@@ -104,6 +104,31 @@ describe('share links', () => {
     expect(list.every((l) => l.url === undefined)).toBe(true);
   });
 
+  it('carries the workshop’s currency code (as members see it after amounts), null when none is set, and still no people', async () => {
+    const owner = await signIn(t.app, DEMO.owner);
+    const made = await maker.post(links()).send({});
+    const token = made.body.url.split('/share/')[1];
+    const stranger = request.agent(t.app);
+    const plain = await stranger.get(`/api/share/${token}`).expect(200);
+    expect(plain.body.currency).toBeNull();
+
+    const settings = (await owner.get(`/api/workshops/${wid}`).expect(200)).body;
+    await owner.patch(`/api/workshops/${wid}`).send({ version: settings.version, currency: 'EUR' }).expect(200);
+    const priced = await stranger.get(`/api/share/${token}`).expect(200);
+    expect(priced.body.currency).toBe('EUR');
+    // The currency is read when the link is opened, like the members' page (not copied into the plan).
+    expect((await owner.get(`/api/workshops/${wid}`).expect(200)).body.currency).toBe(priced.body.currency);
+    const text = JSON.stringify(priced.body);
+    expect(text).not.toContain(settings.name);
+    expect(text).not.toMatch(/@harbourlane\.test/);
+    expect(Object.keys(priced.body).sort()).toEqual(
+      ['buildName', 'cabinets', 'createdAt', 'currency', 'expiresAt', 'exports', 'groups', 'mode', 'parts', 'settings', 'totals', 'warnings'],
+    );
+
+    const latest = (await owner.get(`/api/workshops/${wid}`).expect(200)).body;
+    await owner.patch(`/api/workshops/${wid}`).send({ version: latest.version, currency: null }).expect(200);
+  });
+
   it('viewers cannot make links; days out of range is a field error', async () => {
     const viewer = await signIn(t.app, DEMO.viewer);
     expect((await viewer.post(links()).send({})).status).toBe(403);

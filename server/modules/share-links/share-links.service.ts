@@ -1,5 +1,5 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
-import { shareLinkInput, type ShareLinkDto, type SharedPlanDto } from '../../../shared/schemas/api.schema.js';
+import { shareLinkInput, type Currency, type ShareLinkDto, type SharedPlanDto } from '../../../shared/schemas/api.schema.js';
 import { AppError } from '../../errors.js';
 import { EXPORT_KINDS } from '../../export/cut-plan-exports.js';
 import { linkTo, type PublicUrl } from '../../mail/links.js';
@@ -102,6 +102,8 @@ export class ShareLinksService {
   async open(token: string): Promise<SharedPlanDto> {
     const link = await this.usable(token);
     const plan = await this.em.findOneOrFail(CutPlan, { id: link.cutPlan.id, workshop: link.workshop.id }, { exclude: ['exportCabinets'] });
+    // Only the currency code of the workshop: its name and people stay hidden.
+    const workshop = await this.em.findOneOrFail(Workshop, { id: link.workshop.id }, { fields: ['currency'] });
     await this.em.fork().nativeUpdate(ShareLink, { id: link.id }, { lastOpenedAt: this.now(), openCount: link.openCount + 1 });
     return {
       buildName: plan.buildName,
@@ -115,6 +117,7 @@ export class ShareLinksService {
       groups: plan.groups,
       warnings: plan.warnings.map((w) => ({ code: w.code, message: w.message })),
       exports: [...EXPORT_KINDS],
+      currency: (workshop.currency ?? null) as Currency | null,
     };
   }
 

@@ -25,7 +25,7 @@ export function SharedPlanView({ token, plan }: { token: string; plan: SharedPla
   const s = plan.settings;
   return (
     <div className="space-y-6">
-      <PlanTotals totals={plan.totals} />
+      <PlanTotals totals={plan.totals} currency={plan.currency} />
       {plan.warnings.length ? (
         <Alert tone="warning" title={`${plan.warnings.length} note${plan.warnings.length === 1 ? '' : 's'}`}>
           <ul className="list-disc space-y-0.5 pl-5">
