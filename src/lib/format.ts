@@ -1,4 +1,5 @@
 /** Display formatting. Lengths are millimetres inside; shown with their unit. */
+import { formatInches, type LengthUnit } from '../../shared/units/index';
 
 const numberFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 1, useGrouping: false });
 
@@ -11,6 +12,12 @@ export function formatNumber(value: number, maximumFractionDigits = 1): string {
 /** Outer size as W × H × D, e.g. `220 × 360 × 260 mm`. */
 export function formatSizeMm(widthMm: number, heightMm: number, depthMm: number): string {
   return `${formatNumber(widthMm)} × ${formatNumber(heightMm)} × ${formatNumber(depthMm)} mm`;
+}
+
+/** Outer size as W × H × D in the user's unit: `220 × 360 × 260 mm`, or `8 11/16 × 14 3/16 × 10 1/4 in`. */
+export function formatSize(widthMm: number, heightMm: number, depthMm: number, unit: LengthUnit): string {
+  if (unit === 'mm') return formatSizeMm(widthMm, heightMm, depthMm);
+  return `${[widthMm, heightMm, depthMm].map((v) => formatInches(v).replace(/"$/, '')).join(' × ')} in`;
 }
 
 const UNITS: Array<[Intl.RelativeTimeFormatUnit, number]> = [

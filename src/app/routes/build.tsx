@@ -77,7 +77,7 @@ export function BuildRoute() {
               <Button onClick={() => setEditing(true)} disabled={!designs.data}>
                 Edit
               </Button>
-              <Button variant="ghost" onClick={() => setDeleting(true)}>
+              <Button variant="ghostDanger" onClick={() => setDeleting(true)}>
                 Delete
               </Button>
             </>

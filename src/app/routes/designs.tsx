@@ -60,6 +60,7 @@ export function DesignsRoute() {
           designs={designs.data}
           canEdit={canEdit}
           designHref={(id) => paths.design.getHref(workshopId, id)}
+          units={units}
         />
       ) : null}
       {canEdit ? (

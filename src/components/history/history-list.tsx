@@ -23,16 +23,16 @@ export function HistoryList({ workshopId, subjectType, subjectId, limit = 8 }: {
   const items = history.data.slice(0, limit);
   if (items.length === 0) return <p className="text-sm text-zinc-500">No changes recorded yet.</p>;
   return (
-    <ol className="space-y-2" aria-label="History">
+    <ol className="divide-y divide-zinc-100" aria-label="History">
       {items.map((e) => (
-        <li key={e.id} className="text-sm leading-snug">
-          <span className="text-zinc-800">{e.summary}</span>
-          <span className="block text-[13px] text-zinc-500">
+        <li key={e.id} className="py-2.5 text-sm leading-snug first:pt-0 last:pb-0">
+          <span className="text-zinc-800 [overflow-wrap:anywhere]">{e.summary}</span>
+          <span className="mt-0.5 block text-[13px] text-zinc-500">
             {e.actorEmail} · <time dateTime={e.at} title={formatDateTime(e.at)}>{formatRelativeTime(e.at)}</time>
           </span>
         </li>
       ))}
-      {history.data.length > limit ? <li className="text-[13px] text-zinc-500">…and {history.data.length - limit} earlier changes</li> : null}
+      {history.data.length > limit ? <li className="pt-2.5 text-[13px] text-zinc-500">…and {history.data.length - limit} earlier changes</li> : null}
     </ol>
   );
 }

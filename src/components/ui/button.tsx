@@ -2,7 +2,7 @@ import type { ButtonHTMLAttributes } from 'react';
 import { Link, type LinkProps } from 'react-router-dom';
 import { cn } from '../../lib/cn';
 
-export type ButtonVariant = 'primary' | 'secondary' | 'ghost' | 'danger';
+export type ButtonVariant = 'primary' | 'secondary' | 'ghost' | 'ghostDanger' | 'danger';
 export type ButtonSize = 'sm' | 'md';
 
 const base =
@@ -12,6 +12,8 @@ const variants: Record<ButtonVariant, string> = {
   primary: 'bg-accent-600 text-white shadow-sm hover:bg-accent-700 active:bg-accent-800',
   secondary: 'border border-zinc-300 bg-white text-zinc-800 shadow-xs hover:bg-zinc-50 hover:border-zinc-400',
   ghost: 'text-zinc-700 hover:bg-zinc-100 hover:text-zinc-900',
+  /** A quiet Delete beside other quiet buttons (`cn` only joins classes: a red className would not win over the ghost's grey). */
+  ghostDanger: 'text-red-700 hover:bg-red-50 hover:text-red-800',
   danger: 'bg-red-700 text-white shadow-sm hover:bg-red-800',
 };
 const sizes: Record<ButtonSize, string> = {

@@ -19,6 +19,7 @@ export function SortableTableHead<T>({ table, cellClassName = 'px-5 py-2.5' }: {
         <tr key={group.id}>
           {group.headers.map((header) => {
             const sorted = header.column.getIsSorted();
+            const numeric = isNumericColumn(header.column.columnDef.meta);
             return (
               <th
                 key={header.id}
@@ -27,7 +28,7 @@ export function SortableTableHead<T>({ table, cellClassName = 'px-5 py-2.5' }: {
                 className={cn(
                   cellClassName,
                   'font-normal whitespace-nowrap',
-                  isNumericColumn(header.column.columnDef.meta) && 'text-right',
+                  numeric && 'text-right',
                   columnClassName(header.column.columnDef.meta),
                 )}
               >
@@ -35,10 +36,11 @@ export function SortableTableHead<T>({ table, cellClassName = 'px-5 py-2.5' }: {
                   <button
                     type="button"
                     onClick={header.column.getToggleSortingHandler()}
-                    className={cn('inline-flex items-center gap-1 rounded hover:text-zinc-900', sorted && 'text-zinc-900')}
+                    className={cn('relative inline-flex items-center gap-1 rounded hover:text-zinc-900', sorted && 'text-zinc-900')}
                   >
                     {flexRender(header.column.columnDef.header, header.getContext())}
-                    <span aria-hidden="true" className="w-3 text-xs text-zinc-400">
+                    {/* A numeric header's arrow hangs to the left of its words, so the words end where the figures end. */}
+                    <span aria-hidden="true" className={cn('w-3 text-xs text-zinc-400', numeric && 'absolute top-1/2 right-full mr-1 -translate-y-1/2 text-right')}>
                       {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
                     </span>
                   </button>

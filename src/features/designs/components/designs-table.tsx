@@ -6,7 +6,8 @@ import { Button } from '../../../components/ui/button';
 import { ConfirmDeleteDialog } from '../../../components/data-table/confirm-delete-dialog';
 import { DataTable, rowActionsColumn, RowCount, useDataTable } from '../../../components/data-table/data-table';
 import { Input } from '../../../components/ui/field';
-import { formatDateTime, formatRelativeTime, formatSizeMm } from '../../../lib/format';
+import type { LengthUnit } from '../../../../shared/units/index';
+import { formatDateTime, formatRelativeTime, formatSize } from '../../../lib/format';
 import { notify } from '../../../lib/notify';
 import { useDeleteDesign } from '../api/delete-design';
 import { useDuplicateDesign } from '../api/duplicate-design';
@@ -25,11 +26,14 @@ export function DesignsTable({
   designs,
   canEdit,
   designHref,
+  units = 'mm',
 }: {
   workshopId: number;
   designs: DesignSummaryDto[];
   canEdit: boolean;
   designHref: (designId: number) => string;
+  /** The user's length unit: sizes are shown in it, as on the design page. */
+  units?: LengthUnit;
 }) {
   const navigate = useNavigate();
   const [filter, setFilter] = useState('');
@@ -52,17 +56,19 @@ export function DesignsTable({
         header: 'Outer size (W × H × D)',
         cell: (info) => {
           const d = info.row.original;
-          return <span className="whitespace-nowrap tabular-nums">{formatSizeMm(d.widthMm, d.heightMm, d.depthMm)}</span>;
+          return <span className="whitespace-nowrap tabular-nums">{formatSize(d.widthMm, d.heightMm, d.depthMm, units)}</span>;
         },
       }),
       column.accessor('braceCount', {
         header: 'Braces',
-        meta: { numeric: true },
+        // Hidden on a tablet in portrait, so the names keep their width (the design page has the counts).
+        meta: { numeric: true, className: 'hidden lg:table-cell' },
         cell: (info) => <span className="tabular-nums">{info.getValue()}</span>,
       }),
       column.accessor('openingCount', {
         header: 'Openings',
-        meta: { numeric: true },
+        // Hidden on a tablet in portrait, so the names keep their width (the design page has the counts).
+        meta: { numeric: true, className: 'hidden lg:table-cell' },
         cell: (info) => <span className="tabular-nums">{info.getValue()}</span>,
       }),
       column.accessor((d) => Date.parse(d.updatedAt), {
@@ -99,7 +105,7 @@ export function DesignsTable({
               >
                 Duplicate
               </Button>
-              <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50 hover:text-red-800" onClick={() => setDeleting(d)}>
+              <Button size="sm" variant="ghostDanger" onClick={() => setDeleting(d)}>
                 Delete
               </Button>
             </>
@@ -107,7 +113,7 @@ export function DesignsTable({
         </>
       )),
     ],
-    [canEdit, designHref, duplicate, navigate],
+    [canEdit, designHref, duplicate, navigate, units],
   );
 
   const table = useDataTable({

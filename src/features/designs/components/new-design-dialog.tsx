@@ -68,7 +68,7 @@ export function NewDesignDialog({
         <LengthUnitContext.Provider value={units}>
           <form onSubmit={onSubmit} noValidate className="space-y-4 pt-2">
             <p>
-              Start from the outer size; material, joinery and lining start from plain defaults you can change next.{' '}
+              Start from the outer size; material, joinery and lining take plain defaults you can change next.{' '}
               {lengthUnitHint(units)}
             </p>
             {errors.root?.server ? <Alert tone="error">{errors.root.server.message}</Alert> : null}

@@ -95,7 +95,7 @@ export function StockTable({ workshopId, items, canManage, onEdit, currency }: {
               <Button size="sm" variant="ghost" onClick={() => onEdit(s)}>
                 Edit
               </Button>
-              <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50" onClick={() => setDeleting(s)}>
+              <Button size="sm" variant="ghostDanger" onClick={() => setDeleting(s)}>
                 Delete
               </Button>
             </>

@@ -111,7 +111,7 @@ export function WorkshopSettingsForm({ workshop, onSaved, onConflict }: { worksh
           <Field label="Name" error={errors.name?.message}>
             {(p) => <Input id={p.id} invalid={p.invalid} aria-describedby={p.describedBy} maxLength={120} {...register('name')} />}
           </Field>
-          <Field label="Currency" error={errors.currency?.message} hint="Shown after prices and costs: stock room, cut plans, printed cut diagrams.">
+          <Field label="Currency" error={errors.currency?.message} hint="Shown after prices and costs: stock room, cut plans (shared links too), printed cut diagrams.">
             {(p) => (
               <Select id={p.id} invalid={p.invalid} aria-describedby={p.describedBy} {...register('currency')}>
                 <option value="">None (plain numbers)</option>
