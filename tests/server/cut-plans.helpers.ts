@@ -18,6 +18,15 @@ export const DEMO_SHEET: StockInput = { kind: 'sheet', material: 'MDF', thicknes
 export const BAFFLE_SHEET: StockInput = { kind: 'sheet', material: 'MDF', thicknessMm: 25, widthMm: 2440, heightMm: 1220, quantity: null, cost: 58, grain: 'none' };
 export const DEMO_ROLL: StockInput = { kind: 'roll', material: 'Polyester batt', thicknessMm: 50, widthMm: 1200, lengthMm: null, quantity: null, cost: 6.5, grain: 'none' };
 
+/** A small raw nest job (30 parts of 300 × 200 on 1000 × 1000 sheets) that finishes within its 300 ms. */
+export const SMALL_RAW_JOB = {
+  kerf: 3,
+  mode: 'guillotine',
+  timeLimitMs: 300,
+  stock: [{ id: 'board', kind: 'sheet', width: 1000, height: 1000 }],
+  parts: [{ id: 'shelf', width: 300, height: 200, quantity: 30 }],
+};
+
 export async function demoWorkshopId(agent: Agent): Promise<number> {
   const me = await agent.get('/api/auth/me').expect(200);
   return me.body.memberships[0].workshopId as number;

@@ -10,7 +10,7 @@ import type { CutPlanDto, NestJobDto } from '../../shared/schemas/api.schema.js'
 import { groupJobs } from '../../server/modules/cut-plans/assemble.js';
 import { CutPlan } from '../../server/modules/cut-plans/cut-plan.entity.js';
 import { closeNestPool } from '../../server/workers/pool.js';
-import { demoPlanSetup, finished, pollJob } from './cut-plans.helpers.js';
+import { demoPlanSetup, finished, pollJob, SMALL_RAW_JOB } from './cut-plans.helpers.js';
 import { DEMO, signUp, type Agent, type TestApp } from './helpers.js';
 
 let t: TestApp;
@@ -30,14 +30,6 @@ afterAll(async () => {
 
 const jobsPath = () => `/api/workshops/${workshopId}/nest-jobs`;
 
-/** A small raw job: 30 parts of 300 × 200 on 1000 × 1000 sheets. */
-const RAW_JOB = {
-  kerf: 3,
-  mode: 'guillotine',
-  timeLimitMs: 300,
-  stock: [{ id: 'board', kind: 'sheet', width: 1000, height: 1000 }],
-  parts: [{ id: 'shelf', width: 300, height: 200, quantity: 30 }],
-};
 
 describe('nest job for a build', () => {
   let seen: NestJobDto[];
@@ -97,11 +89,11 @@ describe('nest job for a build', () => {
 describe('raw nest job', () => {
   it('returns the layout of PRODUCT.md §8 without saving a cut plan', async () => {
     const before = await t.orm.em.fork().count(CutPlan, {});
-    const res = await maker.post(jobsPath()).send({ job: RAW_JOB }).expect(202);
+    const res = await maker.post(jobsPath()).send({ job: SMALL_RAW_JOB }).expect(202);
     const last = (await pollJob(maker, workshopId, res.body.id, finished)).at(-1)!;
     expect(last.status).toBe('done');
     expect(last.result!.cutPlanId).toBeNull();
-    const parsed = parseNestJob(RAW_JOB);
+    const parsed = parseNestJob(SMALL_RAW_JOB);
     if (!parsed.ok) throw new Error(parsed.message);
     expect(validateLayout(parsed.job, last.result!.layouts[0]!)).toEqual([]);
     // 30 parts of 0.06 m² on 1 m² sheets: at least 2 sheets (continuous bound), and the layout says how many it used.
@@ -110,7 +102,7 @@ describe('raw nest job', () => {
   });
 
   it('rejects an invalid job with the field named under job.', async () => {
-    const res = await maker.post(jobsPath()).send({ job: { ...RAW_JOB, stock: [{ id: 'board', kind: 'sheet', width: -5, height: 1000 }] } }).expect(400);
+    const res = await maker.post(jobsPath()).send({ job: { ...SMALL_RAW_JOB, stock: [{ id: 'board', kind: 'sheet', width: -5, height: 1000 }] } }).expect(400);
     expect(res.body.error.code).toBe('invalid_input');
     expect(res.body.error.fields['job.stock[0].width']).toMatch(/greater than 0/);
   });
@@ -155,13 +147,13 @@ describe('cancelling', () => {
     expect(after.body.status).toBe('cancelled');
     expect(await t.orm.em.fork().count(CutPlan, { build: buildId })).toBe(before);
     // The pool is free again: a new job runs to the end.
-    const next = await maker.post(jobsPath()).send({ job: RAW_JOB }).expect(202);
+    const next = await maker.post(jobsPath()).send({ job: SMALL_RAW_JOB }).expect(202);
     expect((await pollJob(maker, workshopId, next.body.id, finished)).at(-1)!.status).toBe('done');
   });
 
   it('drops a job that waits for a worker; cancelling twice changes nothing', async () => {
-    const first = await maker.post(jobsPath()).send({ job: { ...RAW_JOB, timeLimitMs: 20_000 } }).expect(202);
-    const second = await maker.post(jobsPath()).send({ job: RAW_JOB }).expect(202);
+    const first = await maker.post(jobsPath()).send({ job: { ...SMALL_RAW_JOB, timeLimitMs: 20_000 } }).expect(202);
+    const second = await maker.post(jobsPath()).send({ job: SMALL_RAW_JOB }).expect(202);
     const c2 = await maker.post(`${jobsPath()}/${second.body.id}/cancel`).expect(200);
     expect(c2.body.status).toBe('cancelled');
     const again = await maker.post(`${jobsPath()}/${second.body.id}/cancel`).expect(200);
@@ -174,15 +166,15 @@ describe('cancelling', () => {
 
 describe('who may see a job', () => {
   it('a viewer reads progress but may not start or cancel', async () => {
-    const res = await maker.post(jobsPath()).send({ job: RAW_JOB }).expect(202);
+    const res = await maker.post(jobsPath()).send({ job: SMALL_RAW_JOB }).expect(202);
     await viewer.get(`${jobsPath()}/${res.body.id}`).expect(200);
-    await viewer.post(jobsPath()).send({ job: RAW_JOB }).expect(403);
+    await viewer.post(jobsPath()).send({ job: SMALL_RAW_JOB }).expect(403);
     await viewer.post(`${jobsPath()}/${res.body.id}/cancel`).expect(403);
     await pollJob(maker, workshopId, res.body.id, finished);
   });
 
   it("another workshop's job id is not found, and so is a malformed id", async () => {
-    const res = await maker.post(jobsPath()).send({ job: RAW_JOB }).expect(202);
+    const res = await maker.post(jobsPath()).send({ job: SMALL_RAW_JOB }).expect(202);
     const other = await signUp(t.app, 'jobs@otherbench.test', 'Other Bench');
     await other.agent.get(`/api/workshops/${other.workshopId}/nest-jobs/${res.body.id}`).expect(404);
     await maker.get(`${jobsPath()}/not-a-job`).expect(404);

@@ -13,7 +13,7 @@ import { WorkshopSettingsService } from '../../server/modules/workshops/workshop
 import { Workshop } from '../../server/modules/workshops/workshop.entity.js';
 import { MemoryStorage } from '../../server/storage/storage.js';
 import { closeNestPool, NEST_THREADS } from '../../server/workers/pool.js';
-import { demoPlanSetup, finished, pollJob } from './cut-plans.helpers.js';
+import { demoPlanSetup, finished, pollJob, SMALL_RAW_JOB } from './cut-plans.helpers.js';
 import { DEMO, signIn, signUp, type Agent, type TestApp } from './helpers.js';
 
 /** A search time far longer than the test: only a cancel ends these jobs early. */
@@ -44,15 +44,6 @@ async function until(what: string, check: () => boolean, timeoutMs = 20_000): Pr
   }
 }
 
-/** A small raw job (30 parts of 300 × 200 on 1000 × 1000 sheets) that finishes within its 300 ms. */
-const SMALL_JOB = {
-  kerf: 3,
-  mode: 'guillotine',
-  timeLimitMs: 300,
-  stock: [{ id: 'board', kind: 'sheet', width: 1000, height: 1000 }],
-  parts: [{ id: 'shelf', width: 300, height: 200, quantity: 30 }],
-};
-
 describe('deleting a workshop with nest jobs in flight', () => {
   it('cancels its queued and running jobs first: they read back cancelled, save nothing, log no error; other workshops’ jobs run on', async () => {
     const own = await demoPlanSetup();
@@ -71,7 +62,7 @@ describe('deleting a workshop with nest jobs in flight', () => {
         started.push(await jobs.create(doomed, { buildId: own.buildId, settings: { stockIds: own.stockIds, timeLimitMs: LONG_MS } }, DEMO.maker));
       }
       const other = await signUp(own.t.app, 'next@saltmarsh.test', 'Saltmarsh Cabinets');
-      const kept = await jobs.create(other.workshopId, { job: SMALL_JOB }, DEMO.maker);
+      const kept = await jobs.create(other.workshopId, { job: SMALL_RAW_JOB }, DEMO.maker);
       await until('the first job to start searching', () => jobs.get(doomed, started[0]!.id).status === 'running');
       expect(jobs.get(doomed, started.at(-1)!.id).status, 'one more job than worker threads waits its turn').toBe('queued');
 
@@ -108,7 +99,7 @@ describe('deleting a workshop with nest jobs in flight', () => {
     const other = await signUp(t.app, 'next@saltmarsh.test', 'Next Bench');
     const next = await other.agent
       .post(`/api/workshops/${other.workshopId}/nest-jobs`)
-      .send({ job: SMALL_JOB })
+      .send({ job: SMALL_RAW_JOB })
       .expect(202);
     expect((await pollJob(other.agent, other.workshopId, next.body.id, finished)).at(-1)!.status).toBe('done');
     expect(await t.orm.em.fork().count(CutPlan, { workshop: workshopId })).toBe(0);
