@@ -83,7 +83,7 @@ export function MembersTable({ workshopId, canManage, currentUserId }: { worksho
                           Only owner
                         </span>
                       ) : (
-                        <Button size="sm" variant="ghost" className="text-red-700 hover:bg-red-50 hover:text-red-800" onClick={() => setRemoving(member)}>
+                        <Button size="sm" variant="ghostDanger" onClick={() => setRemoving(member)}>
                           Remove
                         </Button>
                       )}
