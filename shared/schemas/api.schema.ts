@@ -421,6 +421,8 @@ export const currencySchema = z.enum(CURRENCIES, { error: `currency must be one 
 export const cutDefaultsInput = cutPlanSettingsInput.pick({ kerfMm: true, trimMm: true, minOffcutMm: true, mode: true, timeLimitMs: true });
 export type CutDefaultsInput = z.input<typeof cutDefaultsInput>;
 export type CutDefaults = z.output<typeof cutDefaultsInput>;
+/** The cut settings a workshop starts from when it has saved none: the cut plan schema's own defaults. */
+export const USUAL_CUT_DEFAULTS: CutDefaults = cutDefaultsInput.parse({});
 
 export const workshopCreateInput = z.object({ name: workshopNameSchema });
 /** `PATCH /workshops/:wid`: only the fields sent change; `cutDefaults` replaces the defaults whole (missing ones take the usual value). */

@@ -1,6 +1,6 @@
 import { LockMode, type EntityManager } from '@mikro-orm/sqlite';
 import {
-  cutDefaultsInput,
+  USUAL_CUT_DEFAULTS,
   type CutDefaults,
   type Currency,
   type WorkshopDto,
@@ -22,9 +22,6 @@ import { StockItem } from '../stock/stock-item.entity.js';
 import { Upload } from '../uploads/upload.entity.js';
 import { Membership } from './membership.entity.js';
 import { Workshop } from './workshop.entity.js';
-
-/** The cut settings a workshop starts from when it has saved none: the cut plan schema's own defaults. */
-export const USUAL_CUT_DEFAULTS: CutDefaults = cutDefaultsInput.parse({});
 
 /**
  * Everything a workshop owns, children before parents (foreign keys), so deleting them in this order

@@ -3,7 +3,7 @@ import { useEffect, useMemo, useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { money } from '../../../../shared/render/cut-diagram';
-import { cutPlanSettingsInput, DEFAULT_KERF_MM, type CutDefaults, type CutPlanSettingsInput, type StockInput, type StockItemDto } from '../../../../shared/schemas/api.schema';
+import { cutPlanSettingsInput, USUAL_CUT_DEFAULTS, type CutDefaults, type CutPlanSettingsInput, type StockInput, type StockItemDto } from '../../../../shared/schemas/api.schema';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
@@ -15,6 +15,7 @@ import { formatNumber } from '../../../lib/format';
 import { numberInput } from '../../../lib/number-input';
 import { useStockRoom } from '../api/get-stock-room';
 import { isFinished, jobReadProblem, useCancelNestJob, useNestJob, useStartNestJob } from '../api/nest-jobs';
+import { CutSettingsFields } from '../../../components/cut-plan/cut-settings-fields';
 import { NestProgress } from './nest-progress';
 
 /** The form: settings as the API takes them, the search time in seconds, and whether the stock is typed in. */
@@ -74,6 +75,8 @@ export function MakeCutPlan({
   const [chosen, setChosen] = useState<Set<number> | null>(null);
   const selected = chosen ?? new Set(available.map((s) => s.id));
 
+  // The workshop's default cut settings, else the cut plan schema's own.
+  const initial = defaults ?? USUAL_CUT_DEFAULTS;
   const {
     register,
     control,
@@ -85,12 +88,12 @@ export function MakeCutPlan({
   } = useForm<FormInput>({
     resolver: zodResolver(formSchema),
     defaultValues: {
-      kerfMm: defaults?.kerfMm ?? DEFAULT_KERF_MM,
-      trimMm: defaults?.trimMm ?? 10,
-      mode: defaults?.mode ?? 'guillotine',
-      minOffcutMm: defaults?.minOffcutMm ?? 200,
+      kerfMm: initial.kerfMm,
+      trimMm: initial.trimMm,
+      mode: initial.mode,
+      minOffcutMm: initial.minOffcutMm,
       objective: 'sheets',
-      timeLimitS: defaults ? defaults.timeLimitMs / 1000 : 3,
+      timeLimitS: initial.timeLimitMs / 1000,
       typed: false,
       typedStock: TYPED_DEFAULTS,
     },
@@ -222,26 +225,7 @@ export function MakeCutPlan({
 
         <fieldset className="grid grid-cols-2 gap-3 sm:grid-cols-5" disabled={running}>
           <legend className="mb-2 text-sm font-bold text-zinc-800">Settings</legend>
-          <Field label="Kerf (blade width)" unit="mm" error={errors.kerfMm?.message}>
-            {({ id, invalid }) => <Input id={id} withUnit invalid={invalid} {...numberInput(register, 'kerfMm')} />}
-          </Field>
-          <Field label="Edge trim" unit="mm" error={errors.trimMm?.message} hint="each side of a sheet">
-            {({ id, invalid }) => <Input id={id} withUnit invalid={invalid} {...numberInput(register, 'trimMm')} />}
-          </Field>
-          <Field label="Cuts" error={errors.mode?.message} hint={watch('mode') === 'guillotine' ? 'edge to edge: panel or table saw' : 'any layout: CNC router'}>
-            {({ id }) => (
-              <Select id={id} {...register('mode')}>
-                <option value="guillotine">Guillotine</option>
-                <option value="free">Free</option>
-              </Select>
-            )}
-          </Field>
-          <Field label="Keep offcuts from" unit="mm" error={errors.minOffcutMm?.message} hint="both sides at least">
-            {({ id, invalid }) => <Input id={id} withUnit invalid={invalid} {...numberInput(register, 'minOffcutMm')} />}
-          </Field>
-          <Field label="Search time" unit="s" error={errors.timeLimitS?.message}>
-            {({ id, invalid }) => <Input id={id} withUnit invalid={invalid} {...numberInput(register, 'timeLimitS')} />}
-          </Field>
+          <CutSettingsFields register={register} errors={errors} mode={watch('mode')} />
         </fieldset>
 
         {job.data && problem !== 'lost' ? (

@@ -9,7 +9,7 @@ import { Card } from '../../../components/ui/card';
 import { Field, Input, Select } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { applyApiError } from '../../../lib/form-errors';
-import { numberInput } from '../../../lib/number-input';
+import { CutSettingsFields } from '../../../components/cut-plan/cut-settings-fields';
 import { useUpdateWorkshop } from '../api/workshop-settings';
 import { currencyLabel } from '../currency';
 
@@ -128,26 +128,7 @@ export function WorkshopSettingsForm({ workshop, onSaved, onConflict }: { worksh
 
       <Card title="Default cut settings" description="“Make cut plan” starts from these; each cut plan can still change them.">
         <div className="grid grid-cols-2 gap-4 sm:grid-cols-3">
-          <Field label="Kerf (blade width)" unit="mm" error={errors.kerfMm?.message}>
-            {(p) => <Input id={p.id} withUnit invalid={p.invalid} aria-describedby={p.describedBy} {...numberInput(register, 'kerfMm')} />}
-          </Field>
-          <Field label="Edge trim" unit="mm" error={errors.trimMm?.message} hint="each side of a sheet">
-            {(p) => <Input id={p.id} withUnit invalid={p.invalid} aria-describedby={p.describedBy} {...numberInput(register, 'trimMm')} />}
-          </Field>
-          <Field label="Keep offcuts from" unit="mm" error={errors.minOffcutMm?.message} hint="both sides at least">
-            {(p) => <Input id={p.id} withUnit invalid={p.invalid} aria-describedby={p.describedBy} {...numberInput(register, 'minOffcutMm')} />}
-          </Field>
-          <Field label="Cuts" error={errors.mode?.message} hint={watch('mode') === 'free' ? 'any layout: CNC router' : 'edge to edge: panel or table saw'}>
-            {(p) => (
-              <Select id={p.id} invalid={p.invalid} aria-describedby={p.describedBy} {...register('mode')}>
-                <option value="guillotine">Guillotine</option>
-                <option value="free">Free</option>
-              </Select>
-            )}
-          </Field>
-          <Field label="Search time" unit="s" error={errors.timeLimitS?.message}>
-            {(p) => <Input id={p.id} withUnit invalid={p.invalid} aria-describedby={p.describedBy} {...numberInput(register, 'timeLimitS')} />}
-          </Field>
+          <CutSettingsFields register={register} errors={errors} mode={watch('mode')} />
         </div>
       </Card>
 
